@@ -81,8 +81,15 @@ public final class TimeScales {
             return new double[] {tt.djm0, tt.djm1 - dt};
         }
         try {
-            JSOFA.JulianDate utc = JSOFA.jauTaiutc(tai.djm0, tai.djm1);
-            return new double[] {utc.djm0, utc.djm1};
+            // Invert iauUtctai by iteration, as SOFA's current iauTaiutc does; JSOFA's jauTaiutc is off by
+            // milliseconds in the 1961–1971 drifting-UTC era.
+            double u1 = tai.djm0;
+            double u2 = tai.djm1;
+            for (int k = 0; k < 3; k++) {
+                JSOFA.JulianDate g = JSOFA.jauUtctai(u1, u2);
+                u2 += (tai.djm0 - g.djm0) + (tai.djm1 - g.djm1);
+            }
+            return new double[] {u1, u2};
         } catch (JSOFAIllegalParameter | JSOFAInternalError e) {
             throw new IllegalArgumentException("UTC date out of range: " + e.getMessage(), e);
         }
