@@ -30,6 +30,37 @@ public interface Ephemeris {
     void heliocentric(Body body, double t, double[] out);
 
     /**
+     * Heliocentric position only (three numbers), for callers that need no velocity; implementations may
+     * make it cheaper than {@link #heliocentric}.
+     *
+     * @param body the body
+     * @param t TDB days since J2000
+     * @param out receives x, y, z (au)
+     */
+    default void heliocentricPosition(Body body, double t, double[] out) {
+        double[] s = new double[6];
+        heliocentric(body, t, s);
+        System.arraycopy(s, 0, out, 0, 3);
+    }
+
+    /**
+     * The Moon's geocentric position (three numbers); implementations with a lunar theory of their own
+     * give it directly.
+     *
+     * @param t TDB days since J2000
+     * @param out receives x, y, z (au)
+     */
+    default void moonGeocentricPosition(double t, double[] out) {
+        double[] moon = new double[3];
+        double[] earth = new double[3];
+        heliocentricPosition(Body.MOON, t, moon);
+        heliocentricPosition(Body.EARTH, t, earth);
+        for (int k = 0; k < 3; k++) {
+            out[k] = moon[k] - earth[k];
+        }
+    }
+
+    /**
      * The Sun's barycentric state (the solar-system barycentre seen from the Sun, negated).
      *
      * @param t TDB days since J2000
