@@ -1,0 +1,52 @@
+package trailcross.dynamics;
+
+import java.util.ArrayList;
+import java.util.List;
+import trailcross.ephemeris.Body;
+import trailcross.ephemeris.Ephemeris;
+
+/**
+ * Builds the force model of a particle or parent: the Sun with radiation pressure, the planets, the Earth
+ * and the Moon, the Sun's relativistic term, Poynting–Robertson drag when β &gt; 0 and non-gravitational
+ * forces when any A is non-zero. One instance per thread (terms keep scratch arrays).
+ *
+ * @param ephemeris the planets
+ * @param planets whether to include the planetary perturbations
+ * @param relativity whether to include the 1PN solar term
+ */
+public record ForceModelFactory(Ephemeris ephemeris, boolean planets, boolean relativity) {
+
+    /**
+     * @param beta radiation-pressure β (0 for the parent)
+     * @param a1 radial non-gravitational parameter, au/d²
+     * @param a2 transverse, au/d²
+     * @param a3 normal, au/d²
+     * @return a new force model
+     */
+    public ForceModel create(double beta, double a1, double a2, double a3) {
+        double gm = Body.SUN.gm();
+        List<Acceleration> terms = new ArrayList<>();
+        terms.add(new SunGravity(gm, beta));
+        if (planets) {
+            terms.add(new PlanetaryPerturbations(ephemeris));
+        }
+        if (relativity) {
+            terms.add(new SolarRelativity(gm));
+        }
+        if (beta > 0) {
+            terms.add(new PoyntingRobertsonDrag(gm, beta));
+        }
+        if (a1 != 0 || a2 != 0 || a3 != 0) {
+            terms.add(new NonGravitationalForce(a1, a2, a3));
+        }
+        return new CompositeForceModel(terms);
+    }
+
+    /**
+     * @param beta radiation-pressure β
+     * @return a force model without non-gravitational terms
+     */
+    public ForceModel create(double beta) {
+        return create(beta, 0, 0, 0);
+    }
+}
