@@ -1,0 +1,124 @@
+package trailcross.dynamics;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVPrinter;
+import org.apache.commons.csv.CSVRecord;
+
+/**
+ * Particle states at one epoch, so that a long propagation can resume after a crash: a CSV file
+ * (columns {@code id, t_tdb_jd, x_au, y_au, z_au, vx_au_d, vy_au_d, vz_au_d, beta, status}) written to a
+ * temporary file beside the target and moved into place, so that a crash never leaves half a checkpoint.
+ * Numbers are written with 17 significant digits, so that they read back bit for bit.
+ */
+public final class Checkpoint {
+
+    private static final String[] HEADER = {
+        "id", "t_tdb_jd", "x_au", "y_au", "z_au", "vx_au_d", "vy_au_d", "vz_au_d", "beta", "status"
+    };
+
+    /**
+     * One particle's entry.
+     *
+     * @param particle the particle, at the checkpoint's epoch
+     * @param status its status (DONE while it is still propagating)
+     */
+    public record Entry(TestParticle particle, Outcome.Status status) {
+    }
+
+    private Checkpoint() {
+    }
+
+    /**
+     * @param file where to write (replaced atomically)
+     * @param entries the particles
+     */
+    public static void write(Path file, List<Entry> entries) {
+        Path dir = file.toAbsolutePath().getParent();
+        try {
+            Files.createDirectories(dir);
+            Path tmp = Files.createTempFile(dir, file.getFileName().toString(), ".tmp");
+            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.US_ASCII);
+                    CSVPrinter csv = new CSVPrinter(w,
+                            CSVFormat.DEFAULT.builder().setHeader(HEADER).setRecordSeparator('\n').build())) {
+                for (Entry e : entries) {
+                    TestParticle p = e.particle();
+                    double[] s = p.state();
+                    csv.printRecord(p.id(), num(p.t() + 2451545.0), num(s[0]), num(s[1]), num(s[2]), num(s[3]),
+                            num(s[4]), num(s[5]), num(p.beta()), e.status());
+                }
+            }
+            Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } catch (IOException e) {
+            throw new UncheckedIOException(file + ": cannot write checkpoint: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * @param file a checkpoint
+     * @return its entries
+     * @throws IllegalArgumentException naming the file and line of a bad entry
+     */
+    public static List<Entry> read(Path file) {
+        List<Entry> out = new ArrayList<>();
+        try (Reader r = Files.newBufferedReader(file, StandardCharsets.US_ASCII);
+                CSVParser csv = CSVParser.parse(r, CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).build())) {
+            for (String h : HEADER) {
+                if (!csv.getHeaderMap().containsKey(h)) {
+                    throw new IllegalArgumentException(file + ":1: missing column " + h);
+                }
+            }
+            for (CSVRecord rec : csv) {
+                long line = rec.getRecordNumber() + 1;
+                try {
+                    double[] s = new double[6];
+                    String[] cols = {"x_au", "y_au", "z_au", "vx_au_d", "vy_au_d", "vz_au_d"};
+                    for (int k = 0; k < 6; k++) {
+                        s[k] = finite(rec.get(cols[k]), cols[k]);
+                    }
+                    TestParticle p = new TestParticle(Long.parseLong(rec.get("id")),
+                            finite(rec.get("t_tdb_jd"), "t_tdb_jd") - 2451545.0, s, finite(rec.get("beta"), "beta"));
+                    out.add(new Entry(p, Outcome.Status.valueOf(rec.get("status"))));
+                } catch (IllegalArgumentException e) {
+                    throw new IllegalArgumentException(file + ":" + line + ": " + e.getMessage(), e);
+                }
+            }
+        } catch (NoSuchFileException e) {
+            throw new IllegalArgumentException(file + ": no such file", e);
+        } catch (IOException e) {
+            throw new IllegalArgumentException(file + ": cannot read: " + e.getMessage(), e);
+        } catch (IllegalStateException e) {
+            throw new IllegalArgumentException(file + ": not a checkpoint: " + e.getMessage(), e);
+        }
+        return out;
+    }
+
+    private static double finite(String text, String column) {
+        double v;
+        try {
+            v = Double.parseDouble(text);
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException(column + ": not a number: '" + text + "'");
+        }
+        if (!Double.isFinite(v)) {
+            throw new IllegalArgumentException(column + ": not a finite number: '" + text + "'");
+        }
+        return v;
+    }
+
+    private static String num(double v) {
+        return String.format(Locale.ROOT, "%.17g", v);
+    }
+}
