@@ -1,6 +1,7 @@
 package trailcross.cli;
 
 import java.io.PrintWriter;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -12,7 +13,7 @@ import trailcross.ephemeris.EphemerisBenchmark;
 
 /** {@code trailcross bench WHAT}: benchmarks that print figures (a human table, then one line per figure). */
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = {"Benchmarks: ephemeris (built); eject, propagate, forecast (their stages are not built yet).",
+        description = {"Benchmarks: ephemeris, propagate (built); eject, forecast (their stages are not built yet).",
             "Prints a table, then one line per figure: bench <what> <variant> threads=N <name>=<value> ..."})
 final class BenchCommand implements Callable<Integer> {
 
@@ -29,12 +30,21 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--quick", description = "fewer calls (a rough figure in seconds)")
     boolean quick;
 
+    @Option(names = "--particles", defaultValue = "1000", paramLabel = "N",
+            description = "propagate: particles in the workload (default 1000)")
+    int particles;
+
+    @Option(names = "--check", defaultValue = "20", paramLabel = "N",
+            description = "propagate: particles on which the reference run is cross-checked with DP853")
+    int check;
+
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
         switch (what) {
             case "ephemeris" -> ephemeris(out);
-            case "eject", "propagate", "forecast" -> {
+            case "propagate" -> propagate(out);
+            case "eject", "forecast" -> {
                 spec.commandLine().getErr().println("trailcross bench " + what
                         + ": not available in this version yet (its stage is still being built)");
                 return Main.NOT_BUILT;
@@ -43,6 +53,36 @@ final class BenchCommand implements Callable<Integer> {
                     + "' (ephemeris, eject, propagate, forecast)");
         }
         return 0;
+    }
+
+    private void propagate(PrintWriter out) throws Exception {
+        if (particles < 1) {
+            throw new IllegalArgumentException("--particles must be >= 1");
+        }
+        trailcross.dynamics.PropagationBenchmark bench = new trailcross.dynamics.PropagationBenchmark(
+                new trailcross.dynamics.ForceModelFactory(trailcross.ephemeris.Ephemerides.fast(null), true, true),
+                particles, 1);
+        out.printf(Locale.ROOT, "propagate: %d Halley-type particles, Sun + planets + Earth + Moon + 1PN, 100 years%n",
+                particles);
+        out.flush();
+        int refThreads = Arrays.stream(threads).max().orElse(1);
+        trailcross.dynamics.PropagationBenchmark.ReferenceCheck rc = bench.reference(refThreads, check);
+        out.printf(Locale.ROOT, "reference: Gauss-Radau eps 1e-11; against DP853 (rtol 1e-14) on %d particles: "
+                + "median %.2e au, max %.2e au%n", rc.particles(), rc.medianAu(), rc.maxAu());
+        out.printf(Locale.ROOT, "%-12s %8s %22s %14s %14s %9s%n", "integrator", "threads", "particle-yr/CPU-s",
+                "median err au", "max err au", "wall s");
+        StringBuilder lines = new StringBuilder();
+        for (String integrator : new String[] {"gauss-radau", "dp853"}) {
+            for (int n : threads) {
+                trailcross.dynamics.PropagationBenchmark.Figure f = bench.measure(integrator, n);
+                out.printf(Locale.ROOT, "%-12s %8d %22.1f %14.2e %14.2e %9.2f%n", f.integrator(), f.threads(),
+                        f.particleYearsPerCpuSecond(), f.medianErrorAu(), f.maxErrorAu(), f.wallSeconds());
+                out.flush();
+                lines.append(f.line()).append('\n');
+            }
+        }
+        out.print(lines);
+        out.flush();
     }
 
     private void ephemeris(PrintWriter out) throws Exception {
