@@ -36,7 +36,16 @@ public final class DenseStep {
      * @param out receives x, y, z, vx, vy, vz
      */
     public void state(double t, double[] out) {
-        double s = (t - t0) / dt;
+        evaluate(x0, v0, a0, b, (t - t0) / dt, dt, out, out);
+    }
+
+    /**
+     * The step polynomial at fraction s of a step of length dt (Everhart 1985): positions into
+     * {@code x[0..2]}, velocities into {@code v[0..2]} ({@code v} may be {@code x}, then from index 3).
+     */
+    static void evaluate(double[] x0, double[] v0, double[] a0, double[][] b, double s, double dt, double[] x,
+            double[] v) {
+        int vo = x == v ? 3 : 0;
         for (int k = 0; k < 3; k++) {
             double b0 = b[0][k];
             double b1 = b[1][k];
@@ -50,8 +59,8 @@ public final class DenseStep {
             double pv = a0[k] + s * (b0 / 2 + s * (b1 / 3 + s * (b2 / 4 + s * (b3 / 5
                     + s * (b4 / 6 + s * (b5 / 7 + s * b6 / 8))))));
             double h = s * dt;
-            out[k] = x0[k] + h * v0[k] + h * h * px;
-            out[3 + k] = v0[k] + h * pv;
+            x[k] = x0[k] + h * v0[k] + h * h * px;
+            v[vo + k] = v0[k] + h * pv;
         }
     }
 

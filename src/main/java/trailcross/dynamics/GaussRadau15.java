@@ -245,29 +245,12 @@ public final class GaussRadau15 {
 
     /** Position, velocity and acceleration at τ = h of the current step into x, v, a. */
     private void substep(double t, double dt, double h, ForceModel force) {
-        double[][] b = step.b;
-        for (int k = 0; k < 3; k++) {
-            double px = step.a0[k] / 2 + h * (b[0][k] / 6 + h * (b[1][k] / 12 + h * (b[2][k] / 20
-                    + h * (b[3][k] / 30 + h * (b[4][k] / 42 + h * (b[5][k] / 56 + h * b[6][k] / 72))))));
-            double pv = step.a0[k] + h * (b[0][k] / 2 + h * (b[1][k] / 3 + h * (b[2][k] / 4
-                    + h * (b[3][k] / 5 + h * (b[4][k] / 6 + h * (b[5][k] / 7 + h * b[6][k] / 8))))));
-            double s = h * dt;
-            x[k] = step.x0[k] + s * step.v0[k] + s * s * px;
-            v[k] = step.v0[k] + s * pv;
-        }
+        DenseStep.evaluate(step.x0, step.v0, step.a0, step.b, h, dt, x, v);
         force.acceleration(t + h * dt, x, v, a);
     }
 
     private void endState(double dt) {
-        double[][] b = step.b;
-        for (int k = 0; k < 3; k++) {
-            double px = step.a0[k] / 2 + b[0][k] / 6 + b[1][k] / 12 + b[2][k] / 20 + b[3][k] / 30
-                    + b[4][k] / 42 + b[5][k] / 56 + b[6][k] / 72;
-            double pv = step.a0[k] + b[0][k] / 2 + b[1][k] / 3 + b[2][k] / 4 + b[3][k] / 5 + b[4][k] / 6
-                    + b[5][k] / 7 + b[6][k] / 8;
-            x[k] = step.x0[k] + dt * step.v0[k] + dt * dt * px;
-            v[k] = step.v0[k] + dt * pv;
-        }
+        DenseStep.evaluate(step.x0, step.v0, step.a0, step.b, 1.0, dt, x, v);
     }
 
     /**

@@ -199,20 +199,8 @@ public final class ChebyshevCache implements Ephemeris {
      * products with the position coefficients and the derivative's coefficients (stored with the block).
      */
     private void evaluate(int i, double t, double[] out, int offset, double[] tk) {
-        double length = LENGTH[i];
-        int index = Math.min((int) ((t - origin) / length), lastIndex[i]);
-        double[] c = blocks[i].get(index);
-        if (c == null) {
-            c = fit(i, index);
-        }
+        double[] c = block(i, t, tk);
         int n = COEFFS[i];
-        double x = 2 * (t - origin - index * length) / length - 1;
-        double x2 = 2 * x;
-        tk[0] = 1;
-        tk[1] = x;
-        for (int k = 2; k < n; k++) {
-            tk[k] = x2 * tk[k - 1] - tk[k - 2];
-        }
         double px = 0;
         double py = 0;
         double pz = 0;
@@ -237,6 +225,27 @@ public final class ChebyshevCache implements Ephemeris {
     }
 
     private void position(int i, double t, double[] out, int offset, double[] tk) {
+        double[] c = block(i, t, tk);
+        int n = COEFFS[i];
+        double px = 0;
+        double py = 0;
+        double pz = 0;
+        for (int k = 0, j = 0; k < n; k++, j += 6) {
+            double tv = tk[k];
+            px += c[j] * tv;
+            py += c[j + 1] * tv;
+            pz += c[j + 2] * tv;
+        }
+        out[offset] = px;
+        out[offset + 1] = py;
+        out[offset + 2] = pz;
+    }
+
+    /**
+     * The coefficients of item i's block containing t, with T_0(x) … T_{n−1}(x) of t's position in the
+     * block written into tk.
+     */
+    private double[] block(int i, double t, double[] tk) {
         double length = LENGTH[i];
         int index = Math.min((int) ((t - origin) / length), lastIndex[i]);
         double[] c = blocks[i].get(index);
@@ -251,18 +260,7 @@ public final class ChebyshevCache implements Ephemeris {
         for (int k = 2; k < n; k++) {
             tk[k] = x2 * tk[k - 1] - tk[k - 2];
         }
-        double px = 0;
-        double py = 0;
-        double pz = 0;
-        for (int k = 0, j = 0; k < n; k++, j += 6) {
-            double tv = tk[k];
-            px += c[j] * tv;
-            py += c[j + 1] * tv;
-            pz += c[j + 2] * tv;
-        }
-        out[offset] = px;
-        out[offset + 1] = py;
-        out[offset + 2] = pz;
+        return c;
     }
 
     private double[] fit(int i, int index) {
