@@ -58,7 +58,9 @@ public final class PlanetaryPerturbations implements Acceleration {
         double ay = 0;
         double az = 0;
         double r = Math.sqrt(x[0] * x[0] + x[1] * x[1] + x[2] * x[2]);
-        double noise = 0;
+        // The particle's own position is rounded to ~U of its length, which jitters the Sun's pull by
+        // ~3U of itself; the planets' terms below add the jitter of each separation.
+        double noise = 3 * U * Body.SUN.gm() / (r * r);
         for (int j = 0; j < bodies.length; j++) {
             double px = positions[3 * j];
             double py = positions[3 * j + 1];
