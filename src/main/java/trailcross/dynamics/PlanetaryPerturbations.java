@@ -13,7 +13,7 @@ import trailcross.ephemeris.Ephemeris;
  */
 public final class PlanetaryPerturbations implements Acceleration {
 
-    /** Mean radii in au (IAU WG on Cartographic Coordinates, Archinal et al. 2018), in {@link ChebyshevCache#ALL} order. */
+    /** Mean radii in km (IAU WG on Cartographic Coordinates, Archinal et al. 2018), in {@link ChebyshevCache#ALL} order. */
     private static final double[] RADII_KM = {2439.4, 6051.8, 6371.0, 1737.4, 3389.5, 69911, 58232, 25362, 24622};
 
     private final Ephemeris ephemeris;

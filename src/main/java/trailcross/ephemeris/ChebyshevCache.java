@@ -108,16 +108,14 @@ public final class ChebyshevCache implements Ephemeris {
         switch (body) {
             case SUN -> java.util.Arrays.fill(out, 0, 6, 0.0);
             case EARTH, MOON -> {
-                double[] moon = new double[6];
+                double[] pair = new double[12];
                 double[] tk = new double[MAX_COEFFS];
-                evaluate(EMB_ITEM, t, out, 0, tk);
-                evaluate(MOON_ITEM, t, moon, 0, tk);
-                double f = body == Body.EARTH ? -MOON_FRACTION : 1 - MOON_FRACTION;
-                for (int k = 0; k < 6; k++) {
-                    out[k] += f * moon[k];
-                }
+                evaluate(EMB_ITEM, t, pair, 0, tk, 6);
+                evaluate(MOON_ITEM, t, pair, 6, tk, 6);
+                splitEarthMoon(pair, 0, 6, 6);
+                System.arraycopy(pair, body == Body.EARTH ? 0 : 6, out, 0, 6);
             }
-            default -> evaluate(itemOf(body), t, out, 0, new double[MAX_COEFFS]);
+            default -> evaluate(itemOf(body), t, out, 0, new double[MAX_COEFFS], 6);
         }
     }
 
@@ -128,21 +126,7 @@ public final class ChebyshevCache implements Ephemeris {
      * @param out receives 6 numbers per body, in the order of {@link #ALL} (length ≥ 54)
      */
     public void heliocentricAll(double t, double[] out) {
-        checkSpan(t);
-        double[] tk = new double[MAX_COEFFS];
-        evaluate(0, t, out, 0, tk);
-        evaluate(1, t, out, 6, tk);
-        evaluate(EMB_ITEM, t, out, 12, tk);
-        evaluate(MOON_ITEM, t, out, 18, tk);
-        for (int k = 0; k < 6; k++) {
-            double emb = out[12 + k];
-            double moon = out[18 + k];
-            out[12 + k] = emb - MOON_FRACTION * moon;
-            out[18 + k] = emb + (1 - MOON_FRACTION) * moon;
-        }
-        for (int i = 3; i < 8; i++) {
-            evaluate(i, t, out, 6 * (i + 1), tk);
-        }
+        allBodies(t, out, 6);
     }
 
     /**
@@ -153,20 +137,33 @@ public final class ChebyshevCache implements Ephemeris {
      * @param out receives 3 numbers per body, in the order of {@link #ALL} (length ≥ 27)
      */
     public void heliocentricPositionsAll(double t, double[] out) {
+        allBodies(t, out, 3);
+    }
+
+    /** Every body of {@link #ALL}, {@code width} numbers each (3: positions, 6: states). */
+    private void allBodies(double t, double[] out, int width) {
         checkSpan(t);
         double[] tk = new double[MAX_COEFFS];
-        position(0, t, out, 0, tk);
-        position(1, t, out, 3, tk);
-        position(EMB_ITEM, t, out, 6, tk);
-        position(MOON_ITEM, t, out, 9, tk);
-        for (int k = 0; k < 3; k++) {
-            double emb = out[6 + k];
-            double moon = out[9 + k];
-            out[6 + k] = emb - MOON_FRACTION * moon;
-            out[9 + k] = emb + (1 - MOON_FRACTION) * moon;
-        }
+        evaluate(0, t, out, 0, tk, width);
+        evaluate(1, t, out, width, tk, width);
+        evaluate(EMB_ITEM, t, out, 2 * width, tk, width);
+        evaluate(MOON_ITEM, t, out, 3 * width, tk, width);
+        splitEarthMoon(out, 2 * width, 3 * width, width);
         for (int i = 3; i < 8; i++) {
-            position(i, t, out, 3 * (i + 1), tk);
+            evaluate(i, t, out, width * (i + 1), tk, width);
+        }
+    }
+
+    /**
+     * Turns the Earth–Moon barycentre at {@code emb} and the geocentric Moon at {@code moon} into the
+     * heliocentric Earth and Moon, in place: Earth = EMB − Moon/(1 + EMRAT), Moon = EMB + Moon·EMRAT/(1 + EMRAT).
+     */
+    private static void splitEarthMoon(double[] v, int emb, int moon, int width) {
+        for (int k = 0; k < width; k++) {
+            double b = v[emb + k];
+            double m = v[moon + k];
+            v[emb + k] = b - MOON_FRACTION * m;
+            v[moon + k] = b + (1 - MOON_FRACTION) * m;
         }
     }
 
@@ -177,7 +174,7 @@ public final class ChebyshevCache implements Ephemeris {
         double[] tk = new double[MAX_COEFFS];
         java.util.Arrays.fill(out, 0, 6, 0.0);
         for (int i = 0; i < 8; i++) {
-            evaluate(i, t, s, 0, tk);
+            evaluate(i, t, s, 0, tk, 6);
             double w = ITEMS[i].gm() / massTotal;
             for (int k = 0; k < 6; k++) {
                 out[k] -= w * s[k];
@@ -195,36 +192,11 @@ public final class ChebyshevCache implements Ephemeris {
     }
 
     /**
-     * Position and velocity of item i at t, from its block's Chebyshev series: T_k(x) once, then six dot
-     * products with the position coefficients and the derivative's coefficients (stored with the block).
+     * Position (width 3) or position and velocity (width 6) of item i at t, from its block's Chebyshev
+     * series: T_k(x) once, then dot products with the position coefficients and, for velocities, with the
+     * derivative's coefficients stored with the block.
      */
-    private void evaluate(int i, double t, double[] out, int offset, double[] tk) {
-        double[] c = block(i, t, tk);
-        int n = COEFFS[i];
-        double px = 0;
-        double py = 0;
-        double pz = 0;
-        double vx = 0;
-        double vy = 0;
-        double vz = 0;
-        for (int k = 0, j = 0; k < n; k++, j += 6) {
-            double tv = tk[k];
-            px += c[j] * tv;
-            py += c[j + 1] * tv;
-            pz += c[j + 2] * tv;
-            vx += c[j + 3] * tv;
-            vy += c[j + 4] * tv;
-            vz += c[j + 5] * tv;
-        }
-        out[offset] = px;
-        out[offset + 1] = py;
-        out[offset + 2] = pz;
-        out[offset + 3] = vx;
-        out[offset + 4] = vy;
-        out[offset + 5] = vz;
-    }
-
-    private void position(int i, double t, double[] out, int offset, double[] tk) {
+    private void evaluate(int i, double t, double[] out, int offset, double[] tk, int width) {
         double[] c = block(i, t, tk);
         int n = COEFFS[i];
         double px = 0;
@@ -239,6 +211,20 @@ public final class ChebyshevCache implements Ephemeris {
         out[offset] = px;
         out[offset + 1] = py;
         out[offset + 2] = pz;
+        if (width == 6) {
+            double vx = 0;
+            double vy = 0;
+            double vz = 0;
+            for (int k = 0, j = 3; k < n; k++, j += 6) {
+                double tv = tk[k];
+                vx += c[j] * tv;
+                vy += c[j + 1] * tv;
+                vz += c[j + 2] * tv;
+            }
+            out[offset + 3] = vx;
+            out[offset + 4] = vy;
+            out[offset + 5] = vz;
+        }
     }
 
     /**

@@ -6,7 +6,6 @@ import trailcross.dynamics.ParentHistory;
 import trailcross.dynamics.Perihelion;
 import trailcross.ephemeris.Ephemeris;
 import trailcross.stream.ParentBody;
-import trailcross.time.Epoch;
 
 /**
  * The parent's perihelion returns over a span of years: the span checked against the ephemeris, the
@@ -47,8 +46,8 @@ public final class ParentReturns {
     }
 
     private static double yearStart(int year) {
-        return Epoch.ofTdb(trailcross.time.EpochParser.parse(String.format(java.util.Locale.ROOT,
-                "%04d-01-01T00:00:00 TDB", year)).jd()).daysSinceJ2000();
+        return trailcross.time.EpochParser.parse(String.format(java.util.Locale.ROOT,
+                "%04d-01-01T00:00:00 TDB", year)).daysSinceJ2000();
     }
 
     /**
