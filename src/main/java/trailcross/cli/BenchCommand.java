@@ -13,7 +13,7 @@ import trailcross.ephemeris.EphemerisBenchmark;
 
 /** {@code trailcross bench WHAT}: benchmarks that print figures (a human table, then one line per figure). */
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = {"Benchmarks: ephemeris, propagate (built); eject, forecast (their stages are not built yet).",
+        description = {"Benchmarks: ephemeris, eject, propagate (built); forecast (its stage is not built yet).",
             "Prints a table, then one line per figure: bench <what> <variant> threads=N <name>=<value> ..."})
 final class BenchCommand implements Callable<Integer> {
 
@@ -44,7 +44,8 @@ final class BenchCommand implements Callable<Integer> {
         switch (what) {
             case "ephemeris" -> ephemeris(out);
             case "propagate" -> propagate(out);
-            case "eject", "forecast" -> {
+            case "eject" -> eject(out);
+            case "forecast" -> {
                 spec.commandLine().getErr().println("trailcross bench " + what
                         + ": not available in this version yet (its stage is still being built)");
                 return Main.NOT_BUILT;
@@ -80,6 +81,23 @@ final class BenchCommand implements Callable<Integer> {
                 out.flush();
                 lines.append(f.line()).append('\n');
             }
+        }
+        out.print(lines);
+        out.flush();
+    }
+
+    private void eject(PrintWriter out) {
+        int n = quick ? 200_000 : 2_000_000;
+        out.printf(Locale.ROOT, "eject: %d particles of an invented Halley-type return (Jones 1995, sunlit, 5 size bins)%n", n);
+        out.printf(Locale.ROOT, "%-16s %8s %18s %22s%n", "variant", "threads", "particles per s", "time vs uniform draws");
+        out.flush();
+        trailcross.ejection.EjectionBenchmark bench = new trailcross.ejection.EjectionBenchmark(
+                trailcross.ephemeris.Ephemerides.fast(null));
+        StringBuilder lines = new StringBuilder();
+        for (var f : bench.run(n, threads)) {
+            out.printf(Locale.ROOT, "%-16s %8d %18.0f %21.1fx%n", f.variant(), f.threads(), f.particlesPerSecond(),
+                    f.vsUniformDraws());
+            lines.append(f.line()).append('\n');
         }
         out.print(lines);
         out.flush();

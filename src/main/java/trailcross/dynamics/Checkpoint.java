@@ -2,13 +2,10 @@ package trailcross.dynamics;
 
 import java.io.IOException;
 import java.io.Reader;
-import java.io.UncheckedIOException;
-import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -46,13 +43,9 @@ public final class Checkpoint {
      * @param entries the particles
      */
     public static void write(Path file, List<Entry> entries) {
-        Path dir = file.toAbsolutePath().getParent();
-        try {
-            Files.createDirectories(dir);
-            Path tmp = Files.createTempFile(dir, file.getFileName().toString(), ".tmp");
-            try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.US_ASCII);
-                    CSVPrinter csv = new CSVPrinter(w,
-                            CSVFormat.DEFAULT.builder().setHeader(HEADER).setRecordSeparator('\n').build())) {
+        trailcross.report.AtomicFile.write(file, w -> {
+            try (CSVPrinter csv = new CSVPrinter(w,
+                    CSVFormat.DEFAULT.builder().setHeader(HEADER).setRecordSeparator('\n').build())) {
                 for (Entry e : entries) {
                     TestParticle p = e.particle();
                     double[] s = p.state();
@@ -60,10 +53,7 @@ public final class Checkpoint {
                             num(s[4]), num(s[5]), num(p.beta()), e.status());
                 }
             }
-            Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } catch (IOException e) {
-            throw new UncheckedIOException(file + ": cannot write checkpoint: " + e.getMessage(), e);
-        }
+        });
     }
 
     /**

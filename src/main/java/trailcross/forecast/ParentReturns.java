@@ -45,7 +45,8 @@ public final class ParentReturns {
         return new Result(h, inSpan);
     }
 
-    private static double yearStart(int year) {
+    /** @return Jan 1.0 TDB of a year, days since J2000 */
+    static double yearStart(int year) {
         return trailcross.time.EpochParser.parse(String.format(java.util.Locale.ROOT,
                 "%04d-01-01T00:00:00 TDB", year)).daysSinceJ2000();
     }

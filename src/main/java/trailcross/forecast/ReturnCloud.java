@@ -1,0 +1,67 @@
+package trailcross.forecast;
+
+import java.util.List;
+import java.util.Locale;
+import trailcross.dynamics.ForceModelFactory;
+import trailcross.dynamics.ParentHistory;
+import trailcross.dynamics.Perihelion;
+import trailcross.ejection.ActiveArc;
+import trailcross.ejection.ParticleGenerator;
+import trailcross.ephemeris.Ephemeris;
+import trailcross.stream.EjectionSettings;
+import trailcross.stream.StreamDefinition;
+
+/**
+ * One return of a stream's parent made ready for ejection: the parent integrated ({@link ParentHistory})
+ * over the calendar year of the return plus the active arc on either side (estimated from the osculating
+ * orbit, then checked on the integrated one), the perihelion of that year found, its active arc and the
+ * particle generator built.
+ *
+ * @param history the parent's history
+ * @param perihelion the return
+ * @param generator the particle generator for that return
+ */
+public record ReturnCloud(ParentHistory history, Perihelion perihelion, ParticleGenerator generator) {
+
+    /**
+     * @param stream the stream
+     * @param ephemeris the planets
+     * @param year the calendar year (TDB) of the return's perihelion
+     * @return the prepared return
+     * @throws IllegalArgumentException when the parent has no perihelion that year or the span leaves the
+     *     ephemeris
+     */
+    public static ReturnCloud prepare(StreamDefinition stream, Ephemeris ephemeris, int year) {
+        double from = ParentReturns.yearStart(year);
+        double to = ParentReturns.yearStart(year + 1);
+        var el = stream.parent().elements();
+        EjectionSettings ej = stream.ejection();
+        double before;
+        double after;
+        if (ej.hasProductionTable()) {
+            double[] days = ej.productionTableDays();
+            before = Math.max(0, -days[0]);
+            after = Math.max(0, days[days.length - 1]);
+        } else {
+            before = ActiveArc.twoBodyDays(el, ej.activeInboundAu());
+            after = ActiveArc.twoBodyDays(el, ej.activeOutboundAu());
+        }
+        // Margins for the change of the orbit between the osculating epoch and the return.
+        double lo = from - 1.25 * before - 30;
+        double hi = to + 1.25 * after + 30;
+        for (double t : new double[] {lo, hi, stream.parent().epoch().daysSinceJ2000()}) {
+            ephemeris.checkSpan(t);
+        }
+        ParentHistory h = ParentHistory.compute(stream.parent(), new ForceModelFactory(ephemeris, true, true),
+                ParentReturns.PARENT_EPSILON, lo, hi);
+        List<Perihelion> inYear = h.perihelia().stream().filter(p -> p.t() >= from && p.t() < to).toList();
+        if (inYear.isEmpty()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "--return %d: %s has no perihelion passage in %d (list them with 'trailcross returns %s --since YEAR')",
+                    year, stream.parent().name(), year, stream.source()));
+        }
+        Perihelion p = inYear.get(0);
+        ActiveArc arc = ActiveArc.find(h, p.t(), p.elements(), ej);
+        return new ReturnCloud(h, p, new ParticleGenerator(stream, h, arc));
+    }
+}
