@@ -62,6 +62,8 @@ public final class GaussRadau15 {
     private static final double SAFETY = 0.25;
     private static final int MAX_ITERATIONS = 12;
     private static final double MIN_STEP = 1e-9;
+    /** Consecutive accepted steps below {@link #MIN_STEP} after which the integration stops. */
+    private static final int MAX_TINY_STEPS = 1000;
 
     private final double epsilon;
     private final double escapeDistance;
@@ -112,6 +114,7 @@ public final class GaussRadau15 {
         }
         double direction = Math.signum(tEnd - t0);
         long steps = 0;
+        int tinySteps = 0;
         long rejected = 0;
         if (direction == 0) {
             return new Outcome(Outcome.Status.DONE, t, state.clone(), 0, 0, "");
@@ -237,6 +240,13 @@ public final class GaussRadau15 {
             }
             if (last) {
                 return new Outcome(Outcome.Status.DONE, t, stateOf(x0, v0), steps, rejected, "");
+            }
+            // A step control that keeps accepting steps below MIN_STEP is chasing something it cannot
+            // resolve (a discontinuity in the forces): stop with a reason rather than run on without end.
+            tinySteps = Math.abs(dt) < MIN_STEP ? tinySteps + 1 : 0;
+            if (tinySteps > MAX_TINY_STEPS) {
+                return new Outcome(Outcome.Status.STEP_UNDERFLOW, t, stateOf(x0, v0), steps, rejected,
+                        "steps below " + MIN_STEP + " d");
             }
             predict(b, dtNew / dt);
             dt = dtNew;

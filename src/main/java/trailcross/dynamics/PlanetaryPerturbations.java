@@ -23,6 +23,7 @@ public final class PlanetaryPerturbations implements Acceleration {
     private final double[] radius2 = new double[bodies.length];
     private final double[] positions = new double[3 * bodies.length];
     private final double[] scratch = new double[6];
+    private final double jump;
     private String impact;
     private double rounding;
 
@@ -35,6 +36,7 @@ public final class PlanetaryPerturbations implements Acceleration {
     public PlanetaryPerturbations(Ephemeris ephemeris) {
         this.ephemeris = ephemeris;
         this.cache = ephemeris instanceof ChebyshevCache c ? c : null;
+        this.jump = ephemeris.discontinuityAu();
         for (int j = 0; j < bodies.length; j++) {
             gm[j] = bodies[j].gm();
             double r = RADII_KM[j] / Body.Constants.AU_KM;
@@ -79,6 +81,10 @@ public final class PlanetaryPerturbations implements Acceleration {
             // The separation is the difference of two heliocentric vectors, each rounded to ~U of its
             // length: its relative error (r + r_j) U / d, tripled in GM/d² r̂ (magnitude and direction).
             noise += 3 * U * (r + Math.sqrt(p2)) / d * fd * d;
+            // A piecewise ephemeris jumps by up to `jump` between pieces; the indirect term GM r_j/r_j³
+            // jumps with it by ~2 GM/r_j³ × jump, which dominates the noise far from the Sun, where the
+            // particle's own acceleration is small.
+            noise += 2 * fp * jump;
             ax += fd * dx - fp * px;
             ay += fd * dy - fp * py;
             az += fd * dz - fp * pz;

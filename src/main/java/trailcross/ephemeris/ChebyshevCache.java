@@ -15,6 +15,9 @@ import java.util.concurrent.atomic.AtomicReferenceArray;
  */
 public final class ChebyshevCache implements Ephemeris {
 
+    /** Bound on the fit's error against its source, au (measured in the tests, 5e-11): adjacent blocks differ by at most twice it. */
+    public static final double FIT_BOUND_AU = 1e-10;
+
     /** The fitted items, in order; {@link #MOON_ITEM} is the geocentric Moon. */
     private static final Body[] ITEMS = {
         Body.MERCURY, Body.VENUS, Body.EARTH_MOON_BARYCENTRE, Body.MARS, Body.JUPITER, Body.SATURN,
@@ -85,6 +88,11 @@ public final class ChebyshevCache implements Ephemeris {
             m += b.gm();
         }
         massTotal = m;
+    }
+
+    @Override
+    public double discontinuityAu() {
+        return 2 * FIT_BOUND_AU;
     }
 
     @Override

@@ -85,6 +85,14 @@ public interface Ephemeris {
     }
 
     /**
+     * @return the largest jump of a body's position between adjacent pieces of a piecewise representation
+     *     (au), which an integrator cannot resolve by shrinking its step; 0 for a continuous source
+     */
+    default double discontinuityAu() {
+        return 0;
+    }
+
+    /**
      * Checks a time against the span.
      *
      * @param t TDB days since J2000
