@@ -1,8 +1,94 @@
 package trailcross.cli;
 
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import trailcross.encounter.TrailEncounter;
+import trailcross.ephemeris.Ephemeris;
+import trailcross.ephemeris.Ephemerides;
+import trailcross.forecast.ForecastRun;
+import trailcross.report.ForecastWriter;
+import trailcross.stream.StreamDefinition;
+import trailcross.stream.StreamFileReader;
+import trailcross.time.Epoch;
+import trailcross.time.EpochFormat;
 
-/** {@code trailcross forecast}: listed by the design, its stage still being built. */
-@Command(name = "forecast", mixinStandardHelpOptions = true, description = "The whole job for a year: trails, encounters, radiants, ZHR (not built yet).")
-final class ForecastCommand extends NotBuiltYet {
+/** {@code trailcross forecast STREAM --year Y}: the whole job. */
+@Command(name = "forecast", mixinStandardHelpOptions = true,
+        description = {"The whole job for a year: the parent's returns, a meteoroid cloud per return, its propagation "
+                + "with the planets to the year, node crossings near the Earth's orbit, and per trail the peak time "
+                + "(UTC) and solar longitude, delta r, radiant, Vg, FWHM, fM and ZHR.",
+            "Writes DIR/encounters.csv, crossings.csv, radiants.csv, summary.json; prints a table sorted by strength."})
+final class ForecastCommand implements Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "STREAM", description = "the stream file")
+    Path stream;
+
+    @Option(names = "--year", required = true, paramLabel = "Y", description = "the forecast year")
+    int year;
+
+    @Option(names = "--since", paramLabel = "YEAR", description = "first return examined (default: 200 years before Y)")
+    Integer since;
+
+    @Option(names = "--particles", defaultValue = "1000", paramLabel = "N", description = "particles per return (default 1000)")
+    int particles;
+
+    @Option(names = "--seed", defaultValue = "1", paramLabel = "S", description = "random seed (default 1)")
+    long seed;
+
+    @Option(names = "--threads", defaultValue = "2", paramLabel = "N", description = "worker threads (default 2)")
+    int threads;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "output folder (default out/<stream file name>-<year>)")
+    Path out;
+
+    @Mixin
+    EphemerisOption ephemeris;
+
+    @Override
+    public Integer call() {
+        if (threads < 1) {
+            throw new IllegalArgumentException("--threads must be >= 1, got " + threads);
+        }
+        StreamDefinition d = StreamFileReader.read(stream);
+        Ephemeris eph = Ephemerides.fast(ephemeris.file);
+        PrintWriter o = spec.commandLine().getOut();
+        int from = since != null ? since : year - 200;
+        ForecastRun.Result r = ForecastRun.run(d, eph, new ForecastRun.Settings(year, from, particles, seed, threads),
+                line -> {
+                    o.println(line);
+                    o.flush();
+                });
+        String name = stream.getFileName().toString().replaceFirst("\\.toml$", "");
+        Path dir = out != null ? out : Path.of("out", name + "-" + year);
+        List<Path> files = ForecastWriter.write(dir, stream, r, eph, eph.name(), new Version().getVersion()[0]);
+        o.println();
+        o.printf(Locale.ROOT, "%s in %d: %d trail(s) meet the Earth%n", d.name(), year, r.meetings().size());
+        o.printf(Locale.ROOT, "%-6s %4s %-20s %9s %10s %5s %7s %7s %6s %6s %6s %7s%n", "trail", "rev", "peak (UTC)",
+                "sol.long", "delta r", "n", "RA", "Dec", "Vg", "FWHM", "fM", "ZHR");
+        for (ForecastRun.Trail t : r.meetings()) {
+            TrailEncounter m = t.meeting();
+            o.printf(Locale.ROOT, "%-6d %4d %-20s %9.4f %+10.5f %5d %7.2f %+7.2f %6.2f %5.1fh %6.3f %7s%n",
+                    t.returnYear(), m.revolutions(), EpochFormat.utc(Epoch.ofDaysSinceJ2000(m.peakT()), 0).replace("T", " "),
+                    m.solarLongitudeDeg(), m.deltaR(), m.particles(), m.raDeg(), m.decDeg(), m.vgKmS(), m.fwhmHours(),
+                    m.fM(), Double.isNaN(m.zhr()) ? "-" : String.format(Locale.ROOT, "%.0f", m.zhr()));
+            o.printf(Locale.ROOT, "       peak time uncertainty (resampling) %.0f min%n", m.peakSigmaMin());
+        }
+        if (r.meetings().isEmpty()) {
+            o.println("No trail has enough particles near the Earth in " + year + " (try more --particles or an earlier --since).");
+        }
+        o.println(ForecastWriter.CAUTION);
+        o.printf(Locale.ROOT, "wrote %s (%.0f s)%n", String.join(", ", files.stream().map(Path::toString).toList()), r.seconds());
+        return 0;
+    }
 }

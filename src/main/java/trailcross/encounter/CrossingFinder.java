@@ -26,7 +26,7 @@ public final class CrossingFinder implements StepHandler {
     private final double returnT;
     private final double weight;
     private final double massKg;
-    private final double initialA;
+    private final double initialPeriod;
     private final List<NodeCrossing> found = new ArrayList<>();
     private final double[] s = new double[6];
     private final BrentSolver solver = new BrentSolver(1e-12);
@@ -41,10 +41,10 @@ public final class CrossingFinder implements StepHandler {
      * @param returnT the particle's return
      * @param weight its weight
      * @param massKg its mass
-     * @param initialA its semi-major axis at ejection
+     * @param initialPeriod its orbital period at ejection, days
      */
     public CrossingFinder(double[] normal, double windowStart, double windowEnd, double rMin, double rMax, long id,
-            double returnT, double weight, double massKg, double initialA) {
+            double returnT, double weight, double massKg, double initialPeriod) {
         this.normal = normal.clone();
         this.windowStart = windowStart;
         this.windowEnd = windowEnd;
@@ -54,7 +54,7 @@ public final class CrossingFinder implements StepHandler {
         this.returnT = returnT;
         this.weight = weight;
         this.massKg = massKg;
-        this.initialA = initialA;
+        this.initialPeriod = initialPeriod;
     }
 
     @Override
@@ -97,7 +97,7 @@ public final class CrossingFinder implements StepHandler {
                 return;
             }
         }
-        found.add(new NodeCrossing(id, returnT, weight, massKg, initialA, t, st, vn > 0));
+        found.add(new NodeCrossing(id, returnT, weight, massKg, initialPeriod, t, st, vn > 0));
     }
 
     private double height(DenseStep step, double t) {

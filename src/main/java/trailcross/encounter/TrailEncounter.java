@@ -14,16 +14,16 @@ import trailcross.frames.Angles;
  * One trail's meeting with the Earth in one year, from its particles' node crossings ({@link Encounter}):
  * <ul>
  * <li>the trail section met: crossings whose node passage lies within {@value #ALONG_TRAIL_DAYS} days of the
- * Earth's passage of the same longitude;</li>
+ * Earth's passage of the same longitude, the window doubled (to at most {@value #MAX_ALONG_TRAIL_DAYS} days)
+ * until it holds {@value #ENOUGH} crossings;</li>
  * <li>delta r: the median of their delta r;</li>
- * <li>peak: their crossing longitudes form, against delta r, the trail's oblique cross-section; the line
- * fitted by least squares (Commons Math) gives the solar longitude at delta r = 0, the Earth's path —
- * the peak — and its scatter about the line the activity profile's width (FWHM = 2.355 σ, Gaussian);
- * the peak's uncertainty is the spread of the fitted longitude over 200 bootstrap resamples;</li>
+ * <li>peak: the median of their crossing longitudes (robust against the broad component of small, fast
+ * meteoroids), the activity profile's width from their median absolute deviation (FWHM = 2.355 × 1.4826
+ * MAD, Gaussian), the peak's uncertainty the spread of the median over 200 bootstrap resamples;</li>
  * <li>the radiant and Vg: the mean over the crossings nearest the Earth's path (up to 20);</li>
  * <li>fM (McNaught &amp; Asher 1999): the along-trail density against an unperturbed trail one revolution
- * old, [(3/2) P/a] / |d t_node / d a0|, with t_node the node passage times and a0 the semi-major axes at
- * ejection (fitted slope);</li>
+ * old, 1/|d t_node / d P0|, with t_node the node passage times and P0 the orbital periods at ejection
+ * (least-squares slope; an unperturbed trail N revolutions old has d t_node / d P0 = N);</li>
  * <li>ZHR: the meteoroids brighter than +6.5 mag (mass from Jacchia, Verniani &amp; Briggs 1967,
  * M = 55.34 − 8.75 log V − 2.25 log m, V cm/s, m g, zenith; from memory) crossing the plane within
  * ±{@value #BOX_DELTA_R_AU} au of the Earth's path and ±{@value #BOX_LONGITUDE_DEG}° of the peak, per area
@@ -38,7 +38,7 @@ import trailcross.frames.Angles;
  * @param peakSigmaMin the peak's 1-σ uncertainty, minutes
  * @param solarLongitudeDeg solar longitude of the peak, degrees
  * @param deltaR delta r, au
- * @param particles particles in the section met (within {@value #ALONG_TRAIL_DAYS} days)
+ * @param particles particles in the section met
  * @param raDeg radiant RA, degrees
  * @param decDeg radiant Dec, degrees
  * @param vgKmS Vg, km/s
@@ -52,6 +52,10 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
 
     /** Along-trail half-window: crossings this many days before or after the Earth, days. */
     public static final double ALONG_TRAIL_DAYS = 10.0;
+    /** The window is doubled until it holds this many crossings, ... */
+    public static final int ENOUGH = 12;
+    /** ... but not beyond this half-width, days. */
+    public static final double MAX_ALONG_TRAIL_DAYS = 80.0;
     /** ZHR box: half-width in delta r, au. */
     public static final double BOX_DELTA_R_AU = 0.001;
     /** ZHR box: half-width in solar longitude, degrees. */
@@ -70,11 +74,19 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
     public static TrailEncounter of(List<Encounter> encounters, double parentPeriodDays, double populationIndex,
             Ephemeris ephemeris) {
         List<Encounter> met = new ArrayList<>();
-        for (Encounter e : encounters) {
-            if (Math.abs(e.daysAfterEarth()) <= ALONG_TRAIL_DAYS) {
-                met.add(e);
+        double window = ALONG_TRAIL_DAYS;
+        for (; window <= MAX_ALONG_TRAIL_DAYS; window *= 2) {
+            met.clear();
+            for (Encounter e : encounters) {
+                if (Math.abs(e.daysAfterEarth()) <= window) {
+                    met.add(e);
+                }
+            }
+            if (met.size() >= ENOUGH) {
+                break;
             }
         }
+        window = Math.min(window, MAX_ALONG_TRAIL_DAYS);
         if (met.size() < 3) {
             return null;
         }
@@ -85,20 +97,22 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
         double lon0 = met.get(0).solarLongitudeDeg();
         double[] lon = met.stream().mapToDouble(e -> lon0 + Math.toDegrees(Angles.difference(
                 Math.toRadians(e.solarLongitudeDeg()), Math.toRadians(lon0)))).toArray();
-        double[] fit = intercept(dr, lon, null);
-        double peakLon = fit[0];
-        double sigmaLon = fit[1];
+        // The peak: the median longitude of the section, robust to the broad component of small, fast
+        // meteoroids; its uncertainty from resampling; the width from the median absolute deviation.
+        double peakLon = median(lon, null);
+        double[] absDev = new double[lon.length];
+        for (int k = 0; k < lon.length; k++) {
+            absDev[k] = Math.abs(lon[k] - peakLon);
+        }
+        double sigmaLon = 1.4826 * median(absDev, null);
         DescriptiveStatistics boot = new DescriptiveStatistics();
         Well19937c rng = new Well19937c(Double.doubleToLongBits(returnT));
-        int[] pick = new int[dr.length];
+        int[] pick = new int[lon.length];
         for (int b = 0; b < 200; b++) {
             for (int k = 0; k < pick.length; k++) {
                 pick[k] = rng.nextInt(pick.length);
             }
-            double v = intercept(dr, lon, pick)[0];
-            if (Double.isFinite(v)) {
-                boot.addValue(v);
-            }
+            boot.addValue(median(lon, pick));
         }
         double peakSigmaMin = boot.getStandardDeviation() * HOURS_PER_DEGREE * 60;
         double peakT = EarthLongitude.time(ephemeris, Math.toRadians(peakLon + 180), met.get(0).earthT());
@@ -121,43 +135,34 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
         vg /= nearest.size();
         double raDeg = Angles.normaliseDeg(Math.toDegrees(Math.atan2(sy, sx)));
         double decDeg = Math.toDegrees(Math.atan2(sz, Math.hypot(sx, sy)));
-        // fM from the node passage times against the semi-major axes at ejection.
-        SimpleRegression ta = new SimpleRegression();
-        double aMean = 0;
+        // fM: node passage time against the period at ejection; an unperturbed trail N revolutions old has
+        // dt/dP0 = N, so fM = 1/|dt/dP0| relative to one revolution.
+        SimpleRegression tp = new SimpleRegression();
         for (Encounter e : met) {
-            ta.addData(e.crossing().initialA(), e.crossing().t());
-            aMean += e.crossing().initialA();
+            if (Double.isFinite(e.crossing().initialPeriod())) {
+                tp.addData(e.crossing().initialPeriod(), e.crossing().t());
+            }
         }
-        aMean /= met.size();
-        double period = 2 * Math.PI * Math.sqrt(aMean * aMean * aMean / Body.SUN.gm());
-        double fM = Math.abs(1.5 * period / aMean / ta.getSlope());
+        double fM = 1 / Math.abs(tp.getSlope());
         int revolutions = (int) Math.round((peakT - returnT) / parentPeriodDays);
-        double zhr = zhr(met, peakLon, vg, populationIndex);
+        double zhr = zhr(met, peakLon, vg, populationIndex, window);
         return new TrailEncounter(returnT, revolutions, peakT, peakSigmaMin, Angles.normaliseDeg(peakLon), deltaR,
                 met.size(), raDeg, decDeg, vg, 2.3548 * sigmaLon * HOURS_PER_DEGREE, fM, zhr);
     }
 
-    /** Least-squares longitude at delta r = 0 and the scatter about the line; a resample when pick is given. */
-    private static double[] intercept(double[] dr, double[] lon, int[] pick) {
-        SimpleRegression r = new SimpleRegression();
-        int n = pick == null ? dr.length : pick.length;
-        for (int k = 0; k < n; k++) {
-            int i = pick == null ? k : pick[k];
-            r.addData(dr[i], lon[i]);
+    /** The median of v, or of a resample of it (indices in pick). */
+    private static double median(double[] v, int[] pick) {
+        double[] x = new double[pick == null ? v.length : pick.length];
+        for (int k = 0; k < x.length; k++) {
+            x[k] = v[pick == null ? k : pick[k]];
         }
-        double spread = 0;
-        for (double v : dr) {
-            spread = Math.max(spread, Math.abs(v - dr[0]));
-        }
-        if (spread < 1e-12) {
-            // All at one delta r: no slope to fit; the mean longitude.
-            return new double[] {new DescriptiveStatistics(lon).getMean(), new DescriptiveStatistics(lon).getStandardDeviation()};
-        }
-        return new double[] {r.getIntercept(), Math.sqrt(Math.max(0, r.getMeanSquareError()))};
+        java.util.Arrays.sort(x);
+        int n = x.length;
+        return n % 2 == 1 ? x[n / 2] : 0.5 * (x[n / 2 - 1] + x[n / 2]);
     }
 
     /** The meteoroids brighter than +6.5 mag per km² per hour through the Earth, to ZHR. */
-    private static double zhr(List<Encounter> met, double peakLon, double vg, double r) {
+    private static double zhr(List<Encounter> met, double peakLon, double vg, double r, double window) {
         double vInf = Velocities.vInfinity(vg);
         double logM = (55.34 - 8.75 * Math.log10(vInf * 1e5) - 6.5) / 2.25;
         double massLimitKg = Math.pow(10, logM) * 1e-3;
@@ -184,7 +189,7 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
         double vz = vzSum / n * AU_KM / 86400.0;
         double rE = 1.0;
         double areaKm2 = 2 * BOX_DELTA_R_AU * AU_KM * rE * AU_KM * Math.toRadians(2 * BOX_LONGITUDE_DEG);
-        double hours = 2 * ALONG_TRAIL_DAYS * 24;
+        double hours = 2 * window * 24;
         double plane = weight / (areaKm2 * hours);
         double flux = plane * vg / vz;
         return flux * 37200 / ((13.1 * r - 16.45) * Math.pow(r - 1.3, 0.748));

@@ -38,7 +38,7 @@ class EncounterTest {
         double[] towards = EclipticFrame.eclipticOf(new double[] {Math.cos(dec) * Math.cos(ra), Math.cos(dec) * Math.sin(ra), Math.sin(dec)});
         double vg = 71.0 * KM_S;
         double[] state = {r * Math.cos(lon), r * Math.sin(lon), 0, e[3] - vg * towards[0], e[4] - vg * towards[1], e[5] - vg * towards[2]};
-        NodeCrossing c = new NodeCrossing(1, 0, 1.0, 1e-6, 10, t0 + 2.5, state, state[5] > 0);
+        NodeCrossing c = new NodeCrossing(1, 0, 1.0, 1e-6, 12000, t0 + 2.5, state, state[5] > 0);
         Encounter enc = Encounter.of(c, EPHEMERIS);
         assertThat(enc.earthT()).isCloseTo(t0, within(1e-7));
         assertThat(enc.deltaR()).isCloseTo(0.0007, within(1e-12));
@@ -55,7 +55,7 @@ class EncounterTest {
         // r = p / (1 + e cos nu), and the crossing state lies in the plane z = 0.
         Elements el = Elements.ofDegrees(0.9, 0.85, 30.0, 100.0, 150.0, 2451545.0 + 8000, Body.SUN.gm());
         ForceModelFactory twoBody = new ForceModelFactory(EPHEMERIS, false, false);
-        CrossingFinder f = new CrossingFinder(new double[] {0, 0, 1}, 7000, 9500, 0, 100, 5, 8000, 1.0, 1e-6, el.a());
+        CrossingFinder f = new CrossingFinder(new double[] {0, 0, 1}, 7000, 9500, 0, 100, 5, 8000, 1.0, 1e-6, el.period());
         double[] s0 = el.stateAt(2451545.0 + 7000).toArray();
         new GaussRadau15(1e-10, 1e4).integrate(twoBody.create(0), 7000, s0, 9500, f);
         List<NodeCrossing> found = f.crossings();
@@ -68,38 +68,37 @@ class EncounterTest {
         }
         assertThat(found.get(0).ascending()).isNotEqualTo(found.get(1).ascending());
         // A band of distances excludes the far node.
-        CrossingFinder near = new CrossingFinder(new double[] {0, 0, 1}, 7000, 9500, 0.9, 1.1, 5, 8000, 1.0, 1e-6, el.a());
+        CrossingFinder near = new CrossingFinder(new double[] {0, 0, 1}, 7000, 9500, 0.9, 1.1, 5, 8000, 1.0, 1e-6, el.period());
         new GaussRadau15(1e-10, 1e4).integrate(twoBody.create(0), 7000, s0, 9500, near);
         assertThat(near.crossings()).hasSizeLessThan(2);
     }
 
     @Test
-    void trailAggregateRecoversASyntheticCrossSection() {
-        // 400 crossings: lambda = 235.30 + 2.0 deg/au * delta r + N(0, 0.01 deg), delta r uniform in
-        // [-0.002, 0.002] au around -0.0005, passages within 5 days of the Earth, node passage times
-        // t = tn + S (a0 - 10) with S = 3000 d/au.
+    void trailAggregateRecoversASyntheticSection() {
+        // 400 crossings: lambda = 235.30 + N(0, 0.01 deg), delta r uniform in [-0.0025, +0.0015] au, passages
+        // within 5 days of the Earth, node passage times t = tn + 3 (P0 - P) (a trail three revolutions
+        // old, unperturbed: fM = 1/3).
         Well19937c rng = new Well19937c(99);
         double tE = 7261.6;
+        double p = 33.2 * 365.25;
         List<Encounter> list = new ArrayList<>();
-        double slope = 3000.0;
         for (int k = 0; k < 400; k++) {
             double dr = -0.0005 + 0.004 * (rng.nextDouble() - 0.5);
-            double lambda = 235.30 + 2.0 * dr + 0.01 * gauss(rng);
-            double a0 = 10 + 0.01 * (rng.nextDouble() - 0.5);
-            double t = tE + slope * (a0 - 10);
-            NodeCrossing c = new NodeCrossing(k, tE - 8 * 33.2 * 365.25 - 3, 1e9, 1e-5, a0, t, new double[] {0, 0, 0, 0, 0, 0.01}, false);
+            double lambda = 235.30 + 0.01 * gauss(rng);
+            double p0 = p + 2 * (rng.nextDouble() - 0.5);
+            double t = tE + 3 * (p0 - p);
+            NodeCrossing c = new NodeCrossing(k, tE - 8 * p - 3, 1e9, 1e-5, p0, t, new double[] {0, 0, 0, 0, 0, 0.01}, false);
             list.add(new Encounter(c, tE + 0.01 * k / 400, dr, lambda, 10 * (rng.nextDouble() - 0.5),
                     new GeocentricRadiant(153.6, 21.8, 71.0, lambda)));
         }
-        TrailEncounter t = TrailEncounter.of(list, 33.2 * 365.25, 2.5, EPHEMERIS);
+        TrailEncounter t = TrailEncounter.of(list, p, 2.5, EPHEMERIS);
         assertThat(t.particles()).isEqualTo(400);
         assertThat(t.deltaR()).isCloseTo(-0.0005, within(2e-4));
-        assertThat(t.solarLongitudeDeg()).isCloseTo(235.30, within(3 * 0.01 / Math.sqrt(400) * 2));
+        // The median of 400 normal draws scatters by 1.25 sigma/sqrt(n) = 0.0006 deg; 4 of those.
+        assertThat(t.solarLongitudeDeg()).isCloseTo(235.30, within(0.0025));
         assertThat(t.fwhmHours()).isCloseTo(2.3548 * 0.01 * TrailEncounter.HOURS_PER_DEGREE, within(0.1 * 0.57));
-        assertThat(t.peakSigmaMin()).isBetween(0.5 * 0.01 / 20 * 1461, 2.0 * 0.01 / 20 * 1461);
-        double a = 10;
-        double period = 2 * Math.PI * Math.sqrt(a * a * a / Body.SUN.gm());
-        assertThat(t.fM()).isCloseTo(1.5 * period / a / slope, within(1e-3));
+        assertThat(t.peakSigmaMin()).isBetween(0.5 * 0.0006 * 1461, 2.0 * 0.0006 * 1461);
+        assertThat(t.fM()).isCloseTo(1.0 / 3, within(1e-6));
         assertThat(t.raDeg()).isCloseTo(153.6, within(1e-9));
         assertThat(t.vgKmS()).isCloseTo(71.0, within(1e-9));
         assertThat(t.revolutions()).isEqualTo(8);

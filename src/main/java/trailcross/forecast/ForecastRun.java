@@ -1,0 +1,125 @@
+package trailcross.forecast;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Consumer;
+import trailcross.dynamics.Perihelion;
+import trailcross.ejection.Meteoroid;
+import trailcross.encounter.Encounter;
+import trailcross.encounter.NodeCrossing;
+import trailcross.encounter.TrailEncounter;
+import trailcross.ephemeris.Ephemeris;
+import trailcross.stream.StreamDefinition;
+
+/**
+ * The whole job for one year: the parent's returns in the chosen span, for each the meteoroid cloud
+ * ({@link ReturnCloud}), its propagation to the year with node crossings ({@link TrailPropagation}), the
+ * crossings' encounter quantities ({@link Encounter}) and the trail's meeting with the Earth
+ * ({@link TrailEncounter}). Each return's cloud is seeded from (seed, return year), so that a trail's
+ * particles do not depend on which other returns are run.
+ */
+public final class ForecastRun {
+
+    /**
+     * The run's settings.
+     *
+     * @param year the forecast year
+     * @param sinceYear the first return year examined
+     * @param particles particles per return
+     * @param seed the seed
+     * @param threads worker threads
+     */
+    public record Settings(int year, int sinceYear, int particles, long seed, int threads) {
+    }
+
+    /**
+     * One trail's result.
+     *
+     * @param perihelion the return
+     * @param returnYear its calendar year
+     * @param particles the particles ejected
+     * @param encounters every crossing's encounter quantities in the year
+     * @param meeting the trail's meeting with the Earth, or null when too few particles were near
+     */
+    public record Trail(Perihelion perihelion, int returnYear, int particles, List<Encounter> encounters,
+            TrailEncounter meeting) {
+    }
+
+    /**
+     * The result.
+     *
+     * @param settings the settings
+     * @param trails one per return, in time order
+     * @param seconds wall-clock seconds
+     */
+    public record Result(Settings settings, List<Trail> trails, double seconds) {
+
+        /** @return the trails that meet the Earth, strongest (ZHR, else smallest |delta r|) first */
+        public List<Trail> meetings() {
+            return trails.stream().filter(t -> t.meeting() != null).sorted(Comparator
+                    .comparingDouble((Trail t) -> Double.isNaN(t.meeting().zhr()) ? 0 : -t.meeting().zhr())
+                    .thenComparingDouble(t -> Math.abs(t.meeting().deltaR()))).toList();
+        }
+    }
+
+    private ForecastRun() {
+    }
+
+    /**
+     * @param stream the stream
+     * @param ephemeris the planets
+     * @param s the settings
+     * @param log receives one line per stage
+     * @return the result
+     */
+    public static Result run(StreamDefinition stream, Ephemeris ephemeris, Settings s, Consumer<String> log) {
+        long t0 = System.nanoTime();
+        if (s.sinceYear() >= s.year()) {
+            throw new IllegalArgumentException("--since " + s.sinceYear() + " must be before --year " + s.year());
+        }
+        if (s.particles() < 10) {
+            throw new IllegalArgumentException("--particles must be >= 10, got " + s.particles());
+        }
+        double windowStart = ParentReturns.yearStart(s.year());
+        double windowEnd = ParentReturns.yearStart(s.year() + 1);
+        ephemeris.checkSpan(windowStart);
+        ephemeris.checkSpan(windowEnd);
+        ParentReturns.Result returns = ParentReturns.compute(stream.parent(), ephemeris, s.sinceYear(), s.year());
+        List<Perihelion> chosen = returns.returns().stream().filter(p -> p.t() < windowStart - 30).toList();
+        if (chosen.isEmpty()) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "%s has no perihelion return between %d and %d whose trail could reach %d",
+                    stream.parent().name(), s.sinceYear(), s.year(), s.year()));
+        }
+        log.accept(String.format(Locale.ROOT, "%d returns since %d: %s", chosen.size(), s.sinceYear(),
+                String.join(", ", chosen.stream().map(p -> Integer.toString(yearOf(p.t()))).toList())));
+        double period = stream.parent().elements().period();
+        List<Trail> trails = new ArrayList<>();
+        for (Perihelion p : chosen) {
+            int ry = yearOf(p.t());
+            ReturnCloud rc = ReturnCloud.prepare(stream, ephemeris, ry);
+            List<Meteoroid> cloud = rc.generator().generate(s.particles(), s.seed() * 1_000_003L + ry, false, s.threads());
+            long tp = System.nanoTime();
+            TrailPropagation.Result pr = TrailPropagation.run(cloud, ephemeris, windowStart, windowEnd, s.threads(), null);
+            List<Encounter> enc = new ArrayList<>();
+            for (NodeCrossing c : pr.crossings()) {
+                enc.add(Encounter.of(c, ephemeris));
+            }
+            TrailEncounter meeting = TrailEncounter.of(enc, Double.isFinite(period) ? period : p.elements().period(),
+                    stream.populationIndex(), ephemeris);
+            trails.add(new Trail(p, ry, cloud.size(), enc, meeting));
+            log.accept(String.format(Locale.ROOT, "trail %d: %d particles propagated in %.1f s, %d crossings, %s", ry,
+                    cloud.size(), (System.nanoTime() - tp) / 1e9, enc.size(),
+                    meeting == null ? "too few near the Earth" : String.format(Locale.ROOT, "delta r %+.5f au",
+                            meeting.deltaR())));
+        }
+        return new Result(s, trails, (System.nanoTime() - t0) / 1e9);
+    }
+
+    static int yearOf(double t) {
+        return Integer.parseInt(trailcross.time.EpochFormat.iso(trailcross.time.Epoch.ofDaysSinceJ2000(t),
+                trailcross.time.TimeScale.TDB, 0).substring(0, 4));
+    }
+}
