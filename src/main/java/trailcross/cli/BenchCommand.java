@@ -13,7 +13,7 @@ import trailcross.ephemeris.EphemerisBenchmark;
 
 /** {@code trailcross bench WHAT}: benchmarks that print figures (a human table, then one line per figure). */
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = {"Benchmarks: ephemeris, eject, propagate (built); forecast (its stage is not built yet).",
+        description = {"Benchmarks: ephemeris, eject, propagate, forecast.",
             "Prints a table, then one line per figure: bench <what> <variant> threads=N <name>=<value> ..."})
 final class BenchCommand implements Callable<Integer> {
 
@@ -45,11 +45,7 @@ final class BenchCommand implements Callable<Integer> {
             case "ephemeris" -> ephemeris(out);
             case "propagate" -> propagate(out);
             case "eject" -> eject(out);
-            case "forecast" -> {
-                spec.commandLine().getErr().println("trailcross bench " + what
-                        + ": not available in this version yet (its stage is still being built)");
-                return Main.NOT_BUILT;
-            }
+            case "forecast" -> forecast(out);
             default -> throw new IllegalArgumentException("bench: unknown benchmark '" + what
                     + "' (ephemeris, eject, propagate, forecast)");
         }
@@ -80,6 +76,34 @@ final class BenchCommand implements Callable<Integer> {
                         f.particleYearsPerCpuSecond(), f.medianErrorAu(), f.maxErrorAu(), f.wallSeconds());
                 out.flush();
                 lines.append(f.line()).append('\n');
+            }
+        }
+        out.print(lines);
+        out.flush();
+    }
+
+    private void forecast(PrintWriter out) {
+        int demo = quick ? 200 : 1000;
+        int leonids = quick ? 400 : 4000;
+        out.printf(Locale.ROOT, "forecast: demo (streams/lysandre.toml, 2027, %d particles per return) and the 1999 Leonids "
+                + "(55P since 1890, %d per return)%n", demo, leonids);
+        out.printf(Locale.ROOT, "%-14s %8s %10s %22s %9s %14s%n", "workload", "threads", "particles", "particle-yr/CPU-s",
+                "wall s", "peak heap MB");
+        out.flush();
+        var eph = trailcross.ephemeris.Ephemerides.fast(null);
+        StringBuilder lines = new StringBuilder();
+        for (String w : new String[] {"demo", "leonids-1999"}) {
+            double first = Double.NaN;
+            for (int n : threads) {
+                var f = trailcross.forecast.ForecastBenchmark.measure(w, w.equals("demo") ? demo : leonids, n, eph);
+                if (Double.isNaN(first)) {
+                    first = f.wallSeconds();
+                }
+                out.printf(Locale.ROOT, "%-14s %8d %10d %22.0f %9.1f %14.0f   speed-up %.2fx%n", w, n, f.particles(),
+                        f.particleYearsPerCpuSecond(), f.wallSeconds(), f.peakHeapMb(), first / f.wallSeconds());
+                out.flush();
+                lines.append(f.line()).append(String.format(Locale.ROOT, " speedup_vs_first=%.2f", first / f.wallSeconds()))
+                        .append('\n');
             }
         }
         out.print(lines);

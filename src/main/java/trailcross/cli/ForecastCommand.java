@@ -37,8 +37,16 @@ final class ForecastCommand implements Callable<Integer> {
     @Option(names = "--year", required = true, paramLabel = "Y", description = "the forecast year")
     int year;
 
-    @Option(names = "--since", paramLabel = "YEAR", description = "first return examined (default: 200 years before Y)")
+    @Option(names = "--since", paramLabel = "YEAR",
+            description = "examine every return since this year (default: the last " + DEFAULT_RETURNS + " returns in "
+                    + DEFAULT_SPAN_YEARS + " years whose orbit passes within 0.05 au of the Earth's)")
     Integer since;
+
+    @Option(names = "--returns", paramLabel = "N", description = "the most recent N returns (no screening)")
+    Integer returns;
+
+    static final int DEFAULT_RETURNS = 4;
+    static final int DEFAULT_SPAN_YEARS = 250;
 
     @Option(names = "--particles", defaultValue = "1000", paramLabel = "N", description = "particles per return (default 1000)")
     int particles;
@@ -55,6 +63,24 @@ final class ForecastCommand implements Callable<Integer> {
     @Mixin
     EphemerisOption ephemeris;
 
+    /** A console progress bar (on standard error, so that standard output stays the table). */
+    private static trailcross.forecast.Progress.Stage bar(String label, long total) {
+        me.tongfei.progressbar.ProgressBar pb = new me.tongfei.progressbar.ProgressBarBuilder().setTaskName(label)
+                .setInitialMax(total).setStyle(me.tongfei.progressbar.ProgressBarStyle.ASCII).setUnit(" particles", 1)
+                .setConsumer(new me.tongfei.progressbar.ConsoleProgressBarConsumer(System.err)).build();
+        return new trailcross.forecast.Progress.Stage() {
+            @Override
+            public void accept(long done) {
+                pb.stepTo(done);
+            }
+
+            @Override
+            public void close() {
+                pb.close();
+            }
+        };
+    }
+
     @Override
     public Integer call() {
         if (threads < 1) {
@@ -63,12 +89,20 @@ final class ForecastCommand implements Callable<Integer> {
         StreamDefinition d = StreamFileReader.read(stream);
         Ephemeris eph = Ephemerides.fast(ephemeris.file);
         PrintWriter o = spec.commandLine().getOut();
-        int from = since != null ? since : year - 200;
-        ForecastRun.Result r = ForecastRun.run(d, eph, new ForecastRun.Settings(year, from, particles, seed, threads),
+        if (since != null && returns != null) {
+            throw new IllegalArgumentException("give --since or --returns, not both");
+        }
+        if (returns != null && returns < 1) {
+            throw new IllegalArgumentException("--returns must be >= 1, got " + returns);
+        }
+        int from = since != null ? since : Math.max(1001, year - DEFAULT_SPAN_YEARS);
+        int max = since != null ? 0 : returns != null ? returns : DEFAULT_RETURNS;
+        boolean screen = since == null && returns == null;
+        ForecastRun.Result r = ForecastRun.run(d, eph, new ForecastRun.Settings(year, from, max, screen, particles, seed, threads),
                 line -> {
                     o.println(line);
                     o.flush();
-                });
+                }, System.console() != null ? ForecastCommand::bar : trailcross.forecast.Progress.NONE);
         String name = stream.getFileName().toString().replaceFirst("\\.toml$", "");
         Path dir = out != null ? out : Path.of("out", name + "-" + year);
         List<Path> files = ForecastWriter.write(dir, stream, r, eph, eph.name(), new Version().getVersion()[0]);

@@ -8,7 +8,7 @@ import picocli.CommandLine.Command;
 
 /**
  * The {@code trailcross} command line (picocli). Exit codes: 0 success, 1 a validation case failed,
- * 2 bad input (the message names the file, line, key or option), 3 a command not built yet,
+ * 2 bad input (the message names the file, line, key or option),
  * 70 an internal error.
  */
 @Command(name = "trailcross", mixinStandardHelpOptions = true, versionProvider = Version.class,
@@ -29,8 +29,6 @@ public final class Main implements Runnable {
 
     /** Exit code for bad input. */
     public static final int BAD_INPUT = 2;
-    /** Exit code of a command that is listed but not built yet. */
-    public static final int NOT_BUILT = 3;
     /** Exit code for an internal error. */
     public static final int INTERNAL = 70;
 

@@ -17,7 +17,8 @@ import trailcross.stream.StreamDefinition;
  * The whole job for one year: the parent's returns in the chosen span, for each the meteoroid cloud
  * ({@link ReturnCloud}), its propagation to the year with node crossings ({@link TrailPropagation}), the
  * crossings' encounter quantities ({@link Encounter}) and the trail's meeting with the Earth
- * ({@link TrailEncounter}). Each return's cloud is seeded from (seed, return year), so that a trail's
+ * ({@link TrailEncounter}). By default the returns are screened by a quick test — the orbit at the return
+ * passes within {@value #SCREEN_MOID_AU} au of the Earth's — and the most recent few kept. Each return's cloud is seeded from (seed, return year), so that a trail's
  * particles do not depend on which other returns are run.
  */
 public final class ForecastRun {
@@ -27,11 +28,13 @@ public final class ForecastRun {
      *
      * @param year the forecast year
      * @param sinceYear the first return year examined
+     * @param maxReturns at most this many returns, the most recent (0: all in the span)
+     * @param screen keep only returns whose orbit passes within {@link #SCREEN_MOID_AU} of the Earth's
      * @param particles particles per return
      * @param seed the seed
      * @param threads worker threads
      */
-    public record Settings(int year, int sinceYear, int particles, long seed, int threads) {
+    public record Settings(int year, int sinceYear, int maxReturns, boolean screen, int particles, long seed, int threads) {
     }
 
     /**
@@ -64,6 +67,9 @@ public final class ForecastRun {
         }
     }
 
+    /** The quick test: a return's trail can reach the Earth when its orbit's MOID is below this, au. */
+    public static final double SCREEN_MOID_AU = 0.05;
+
     private ForecastRun() {
     }
 
@@ -75,6 +81,19 @@ public final class ForecastRun {
      * @return the result
      */
     public static Result run(StreamDefinition stream, Ephemeris ephemeris, Settings s, Consumer<String> log) {
+        return run(stream, ephemeris, s, log, Progress.NONE);
+    }
+
+    /**
+     * @param stream the stream
+     * @param ephemeris the planets
+     * @param s the settings
+     * @param log receives one line per stage
+     * @param progress receives the propagation's progress, per trail
+     * @return the result
+     */
+    public static Result run(StreamDefinition stream, Ephemeris ephemeris, Settings s, Consumer<String> log,
+            Progress progress) {
         long t0 = System.nanoTime();
         if (s.sinceYear() >= s.year()) {
             throw new IllegalArgumentException("--since " + s.sinceYear() + " must be before --year " + s.year());
@@ -87,7 +106,12 @@ public final class ForecastRun {
         ephemeris.checkSpan(windowStart);
         ephemeris.checkSpan(windowEnd);
         ParentReturns.Result returns = ParentReturns.compute(stream.parent(), ephemeris, s.sinceYear(), s.year());
-        List<Perihelion> chosen = returns.returns().stream().filter(p -> p.t() < windowStart - 30).toList();
+        List<Perihelion> chosen = new ArrayList<>(returns.returns().stream().filter(p -> p.t() < windowStart - 30)
+                .filter(p -> !s.screen() || trailcross.orbit.Moid.of(p.elements(),
+                        trailcross.encounter.EarthOrbit.at(ephemeris, p.t())) <= SCREEN_MOID_AU).toList());
+        if (s.maxReturns() > 0 && chosen.size() > s.maxReturns()) {
+            chosen = new ArrayList<>(chosen.subList(chosen.size() - s.maxReturns(), chosen.size()));
+        }
         if (chosen.isEmpty()) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "%s has no perihelion return between %d and %d whose trail could reach %d",
@@ -102,7 +126,10 @@ public final class ForecastRun {
             ReturnCloud rc = ReturnCloud.prepare(stream, ephemeris, ry);
             List<Meteoroid> cloud = rc.generator().generate(s.particles(), s.seed() * 1_000_003L + ry, false, s.threads());
             long tp = System.nanoTime();
-            TrailPropagation.Result pr = TrailPropagation.run(cloud, ephemeris, windowStart, windowEnd, s.threads(), null);
+            TrailPropagation.Result pr;
+            try (Progress.Stage stage = progress.open("trail " + ry, cloud.size())) {
+                pr = TrailPropagation.run(cloud, ephemeris, windowStart, windowEnd, s.threads(), stage);
+            }
             List<Encounter> enc = new ArrayList<>();
             for (NodeCrossing c : pr.crossings()) {
                 enc.add(Encounter.of(c, ephemeris));

@@ -20,7 +20,7 @@ import trailcross.time.EpochFormat;
  * {@code crossings.csv} (every node crossing: {@code return_year, id, crossing_tdb, earth_utc,
  * solar_longitude_deg, delta_r_au, days_after_earth, node, ra_deg, dec_deg, vg_km_s, weight, mass_kg}),
  * {@code radiants.csv} (the daily radiant table from the crossings near the Earth) and
- * {@code summary.json} (inputs, seed, version, run time, caution).
+ * {@code summary.json} (inputs, seed, version, run time, caution), and the plots ({@link ForecastPlots}).
  */
 public final class ForecastWriter {
 
@@ -98,6 +98,8 @@ public final class ForecastWriter {
             }
         });
         written.add(rad);
+        written.addAll(ForecastPlots.write(dir, stream.getFileName().toString().replaceFirst("\\.toml$", "") + " "
+                + r.settings().year(), r, table));
         Path sum = dir.resolve("summary.json");
         ForecastRun.Settings s = r.settings();
         AtomicFile.write(sum, w -> {

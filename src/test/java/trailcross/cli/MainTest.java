@@ -83,11 +83,4 @@ class MainTest {
         assertThat(bad.code()).isEqualTo(Main.BAD_INPUT);
         assertThat(bad.err()).contains("no time scale");
     }
-
-    @Test
-    void unbuiltCommandsSaySoAndExitThree() {
-        Run r = run("validate");
-        assertThat(r.code()).isEqualTo(Main.NOT_BUILT);
-        assertThat(r.err()).contains("not available in this version yet");
-    }
 }

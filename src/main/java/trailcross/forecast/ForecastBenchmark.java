@@ -1,0 +1,86 @@
+package trailcross.forecast;
+
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.nio.file.Path;
+import java.util.Locale;
+import trailcross.ephemeris.Ephemeris;
+import trailcross.stream.StreamDefinition;
+import trailcross.stream.StreamFileReader;
+
+/**
+ * Times whole forecasts: the demo (the invented comet of {@code streams/lysandre.toml} in 2027, its default
+ * returns) and the 1999 Leonid case (55P since 1890), each on the thread counts asked. Figures: particles,
+ * particle-years propagated (particles × years from their return to the window's end) per CPU-second
+ * of the process, wall time, and the peak heap in use (the JVM's memory pools' peak usage, reset before each
+ * run).
+ */
+public final class ForecastBenchmark {
+
+    /**
+     * One figure.
+     *
+     * @param workload the workload's name
+     * @param threads threads
+     * @param particles particles ejected
+     * @param particleYearsPerCpuSecond particle-years per CPU-second
+     * @param wallSeconds wall time
+     * @param peakHeapMb peak heap in use, MB
+     */
+    public record Figure(String workload, int threads, long particles, double particleYearsPerCpuSecond,
+            double wallSeconds, double peakHeapMb) {
+        /** @return the machine-readable line */
+        public String line() {
+            return String.format(Locale.ROOT, "bench forecast %s threads=%d particles=%d particle_years_per_cpu_s=%.0f "
+                    + "wall_s=%.1f peak_heap_mb=%.0f", workload, threads, particles, particleYearsPerCpuSecond,
+                    wallSeconds, peakHeapMb);
+        }
+    }
+
+    private ForecastBenchmark() {
+    }
+
+    /**
+     * @param workload "demo" or "leonids-1999"
+     * @param particles particles per return
+     * @param threads threads
+     * @param ephemeris the planets
+     * @return the figure
+     */
+    public static Figure measure(String workload, int particles, int threads, Ephemeris ephemeris) {
+        boolean demo = workload.equals("demo");
+        StreamDefinition d = StreamFileReader.read(Path.of(demo ? "streams/lysandre.toml" : "validation/55p-tempel-tuttle.toml"));
+        ForecastRun.Settings s = demo ? new ForecastRun.Settings(2027, 1777, 4, true, particles, 1, threads)
+                : new ForecastRun.Settings(1999, 1890, 0, false, particles, 1, threads);
+        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+            pool.resetPeakUsage();
+        }
+        long cpu0 = cpuNanos();
+        long t0 = System.nanoTime();
+        ForecastRun.Result r = ForecastRun.run(d, ephemeris, s, line -> { });
+        double wall = (System.nanoTime() - t0) / 1e9;
+        double cpu = (cpuNanos() - cpu0) / 1e9;
+        double end = ParentReturns.yearStart(s.year() + 1);
+        double py = 0;
+        long n = 0;
+        for (ForecastRun.Trail t : r.trails()) {
+            py += t.particles() * (end - t.perihelion().t()) / 365.25;
+            n += t.particles();
+        }
+        double peak = 0;
+        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+            if (pool.getType() == MemoryType.HEAP) {
+                peak += pool.getPeakUsage().getUsed();
+            }
+        }
+        return new Figure(workload, threads, n, py / cpu, wall, peak / 1048576.0);
+    }
+
+    private static long cpuNanos() {
+        if (ManagementFactory.getOperatingSystemMXBean() instanceof com.sun.management.OperatingSystemMXBean os) {
+            return os.getProcessCpuTime();
+        }
+        throw new IllegalStateException("process CPU time is not available on this JVM");
+    }
+}

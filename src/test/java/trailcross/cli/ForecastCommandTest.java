@@ -1,0 +1,60 @@
+package trailcross.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code trailcross forecast} end to end on the demo comet (a small run), and its bad-input paths. */
+class ForecastCommandTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void demoTrailMeetsTheEarthAndTheTablesAreWritten() throws IOException {
+        MainTest.Run r = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2027", "--returns", "1",
+                "--particles", "400", "--out", dir.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("1 returns since").contains("trail(s) meet the Earth")
+                .contains("operational decisions rest with");
+        List<String> enc = Files.readAllLines(dir.resolve("encounters.csv"));
+        assertThat(enc.get(0)).isEqualTo("return_year,revolutions,peak_utc,solar_longitude_deg,delta_r_au,particles,"
+                + "ra_deg,dec_deg,vg_km_s,fwhm_h,zhr");
+        assertThat(enc).hasSize(2);
+        String[] row = enc.get(1).split(",", -1);
+        assertThat(row[0]).isEqualTo("1993");
+        assertThat(row[1]).isEqualTo("1");
+        // The invented comet's descending node lies near the Earth's orbit in early June (stream file), so
+        // its trail is met near solar longitude 75 deg, within 0.01 au.
+        assertThat(row[2]).startsWith("2027-06-");
+        assertThat(Double.parseDouble(row[3])).isBetween(73.0, 77.0);
+        assertThat(Math.abs(Double.parseDouble(row[4]))).isLessThan(0.01);
+        assertThat(row[10]).isNotEmpty();
+        assertThat(Files.readAllLines(dir.resolve("crossings.csv")).size()).isGreaterThan(10);
+        assertThat(Files.readString(dir.resolve("radiants.csv"))).startsWith("date_utc,solar_longitude_deg,ra_deg,dec_deg,vg_km_s\n2027-");
+        assertThat(Files.readString(dir.resolve("summary.json"))).contains("\"seed\": 1").contains("\"caution\"");
+        for (String png : new String[] {"node-map.png", "activity.png", "radiants.png"}) {
+            byte[] b = Files.readAllBytes(dir.resolve(png));
+            assertThat(b.length).as(png).isGreaterThan(5000);
+            assertThat(new String(b, 1, 3, java.nio.charset.StandardCharsets.US_ASCII)).isEqualTo("PNG");
+        }
+    }
+
+    @Test
+    void badInputGivesOneLine() {
+        MainTest.Run a = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2027", "--since", "2030");
+        assertThat(a.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(a.err()).contains("--since 2030 must be before --year 2027");
+        MainTest.Run b = MainTest.run("forecast", "streams/lysandre.toml", "--year", "3200");
+        assertThat(b.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(b.err()).contains("outside the span");
+        MainTest.Run c = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2027", "--since", "1990", "--returns", "2");
+        assertThat(c.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(c.err()).contains("--since or --returns, not both");
+    }
+}
