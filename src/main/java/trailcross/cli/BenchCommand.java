@@ -93,6 +93,9 @@ final class BenchCommand implements Callable<Integer> {
         var eph = trailcross.ephemeris.Ephemerides.fast(null);
         StringBuilder lines = new StringBuilder();
         for (String w : new String[] {"demo", "leonids-1999"}) {
+            // A small run first fits the ephemeris cache over the span and warms the JIT, so that the first
+            // timed thread count does not pay for them.
+            trailcross.forecast.ForecastBenchmark.measure(w, 20, 1, eph);
             double first = Double.NaN;
             for (int n : threads) {
                 var f = trailcross.forecast.ForecastBenchmark.measure(w, w.equals("demo") ? demo : leonids, n, eph);

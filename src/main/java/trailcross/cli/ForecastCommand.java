@@ -60,6 +60,9 @@ final class ForecastCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "output folder (default out/<stream file name>-<year>)")
     Path out;
 
+    @Option(names = "--resume", description = "continue a run of the same settings in --out after a crash")
+    boolean resume;
+
     @Mixin
     EphemerisOption ephemeris;
 
@@ -98,13 +101,23 @@ final class ForecastCommand implements Callable<Integer> {
         int from = since != null ? since : Math.max(1001, year - DEFAULT_SPAN_YEARS);
         int max = since != null ? 0 : returns != null ? returns : DEFAULT_RETURNS;
         boolean screen = since == null && returns == null;
-        ForecastRun.Result r = ForecastRun.run(d, eph, new ForecastRun.Settings(year, from, max, screen, particles, seed, threads),
+        String name = stream.getFileName().toString().replaceFirst("\\.toml$", "");
+        Path dir = out != null ? out : Path.of("out", name + "-" + year);
+        ForecastRun.Settings settings = new ForecastRun.Settings(year, from, max, screen, particles, seed, threads);
+        String fingerprint;
+        try {
+            fingerprint = "settings " + settings.year() + " " + settings.sinceYear() + " " + settings.maxReturns() + " "
+                    + settings.screen() + " " + settings.particles() + " " + settings.seed() + " ephemeris " + eph.name()
+                    + "\n" + java.nio.file.Files.readString(stream);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        trailcross.forecast.TrailCheckpoint checkpoint = new trailcross.forecast.TrailCheckpoint(dir, fingerprint, resume);
+        ForecastRun.Result r = ForecastRun.run(d, eph, settings,
                 line -> {
                     o.println(line);
                     o.flush();
-                }, System.console() != null ? ForecastCommand::bar : trailcross.forecast.Progress.NONE);
-        String name = stream.getFileName().toString().replaceFirst("\\.toml$", "");
-        Path dir = out != null ? out : Path.of("out", name + "-" + year);
+                }, System.console() != null ? ForecastCommand::bar : trailcross.forecast.Progress.NONE, checkpoint);
         List<Path> files = ForecastWriter.write(dir, stream, r, eph, eph.name(), new Version().getVersion()[0]);
         o.println();
         o.printf(Locale.ROOT, "%s in %d: %d trail(s) meet the Earth%n", d.name(), year, r.meetings().size());

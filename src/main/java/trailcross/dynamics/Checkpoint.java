@@ -8,7 +8,6 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
@@ -96,19 +95,10 @@ public final class Checkpoint {
     }
 
     private static double finite(String text, String column) {
-        double v;
-        try {
-            v = Double.parseDouble(text);
-        } catch (NumberFormatException e) {
-            throw new IllegalArgumentException(column + ": not a number: '" + text + "'");
-        }
-        if (!Double.isFinite(v)) {
-            throw new IllegalArgumentException(column + ": not a finite number: '" + text + "'");
-        }
-        return v;
+        return trailcross.report.CsvNumbers.finite(text, column);
     }
 
     private static String num(double v) {
-        return String.format(Locale.ROOT, "%.17g", v);
+        return trailcross.report.CsvNumbers.exact(v);
     }
 }

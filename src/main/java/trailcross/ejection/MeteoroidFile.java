@@ -8,7 +8,6 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
@@ -105,17 +104,7 @@ public final class MeteoroidFile {
     }
 
     private static double finite(CSVRecord rec, String column) {
-        String text = rec.get(column);
-        double v;
-        try {
-            v = Double.parseDouble(text);
-        } catch (NumberFormatException e) {
-            throw new IllegalArgumentException(column + ": not a number: '" + text + "'");
-        }
-        if (!Double.isFinite(v)) {
-            throw new IllegalArgumentException(column + ": not a finite number: '" + text + "'");
-        }
-        return v;
+        return trailcross.report.CsvNumbers.finite(rec.get(column), column);
     }
 
     private static double positive(CSVRecord rec, String column) {
@@ -135,6 +124,6 @@ public final class MeteoroidFile {
     }
 
     private static String num(double v) {
-        return String.format(Locale.ROOT, "%.17g", v);
+        return trailcross.report.CsvNumbers.exact(v);
     }
 }

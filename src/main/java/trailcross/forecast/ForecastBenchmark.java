@@ -14,7 +14,7 @@ import trailcross.stream.StreamFileReader;
  * returns) and the 1999 Leonid case (55P since 1890), each on the thread counts asked. Figures: particles,
  * particle-years propagated (particles × years from their return to the window's end) per CPU-second
  * of the process, wall time, and the peak heap in use (the JVM's memory pools' peak usage, reset before each
- * run).
+ * run). The command runs each workload once with a few particles first (cache fitted, JIT warm).
  */
 public final class ForecastBenchmark {
 

@@ -81,7 +81,7 @@ public final class ForecastRun {
      * @return the result
      */
     public static Result run(StreamDefinition stream, Ephemeris ephemeris, Settings s, Consumer<String> log) {
-        return run(stream, ephemeris, s, log, Progress.NONE);
+        return run(stream, ephemeris, s, log, Progress.NONE, null);
     }
 
     /**
@@ -90,10 +90,11 @@ public final class ForecastRun {
      * @param s the settings
      * @param log receives one line per stage
      * @param progress receives the propagation's progress, per trail
+     * @param checkpoint where finished trails are saved and read back (null: none)
      * @return the result
      */
     public static Result run(StreamDefinition stream, Ephemeris ephemeris, Settings s, Consumer<String> log,
-            Progress progress) {
+            Progress progress, TrailCheckpoint checkpoint) {
         long t0 = System.nanoTime();
         if (s.sinceYear() >= s.year()) {
             throw new IllegalArgumentException("--since " + s.sinceYear() + " must be before --year " + s.year());
@@ -123,22 +124,31 @@ public final class ForecastRun {
         List<Trail> trails = new ArrayList<>();
         for (Perihelion p : chosen) {
             int ry = yearOf(p.t());
-            ReturnCloud rc = ReturnCloud.prepare(stream, ephemeris, ry);
-            List<Meteoroid> cloud = rc.generator().generate(s.particles(), s.seed() * 1_000_003L + ry, false, s.threads());
             long tp = System.nanoTime();
-            TrailPropagation.Result pr;
-            try (Progress.Stage stage = progress.open("trail " + ry, cloud.size())) {
-                pr = TrailPropagation.run(cloud, ephemeris, windowStart, windowEnd, s.threads(), stage);
+            List<NodeCrossing> crossings = checkpoint == null ? null : checkpoint.read(ry);
+            boolean resumed = crossings != null;
+            if (!resumed) {
+                ReturnCloud rc = ReturnCloud.prepare(stream, ephemeris, ry);
+                List<Meteoroid> cloud = rc.generator().generate(s.particles(), s.seed() * 1_000_003L + ry, false,
+                        s.threads());
+                try (Progress.Stage stage = progress.open("trail " + ry, cloud.size())) {
+                    crossings = TrailPropagation.run(cloud, ephemeris, windowStart, windowEnd, s.threads(), stage)
+                            .crossings();
+                }
+                if (checkpoint != null) {
+                    checkpoint.write(ry, crossings);
+                }
             }
             List<Encounter> enc = new ArrayList<>();
-            for (NodeCrossing c : pr.crossings()) {
+            for (NodeCrossing c : crossings) {
                 enc.add(Encounter.of(c, ephemeris));
             }
             TrailEncounter meeting = TrailEncounter.of(enc, Double.isFinite(period) ? period : p.elements().period(),
                     stream.populationIndex(), ephemeris);
-            trails.add(new Trail(p, ry, cloud.size(), enc, meeting));
-            log.accept(String.format(Locale.ROOT, "trail %d: %d particles propagated in %.1f s, %d crossings, %s", ry,
-                    cloud.size(), (System.nanoTime() - tp) / 1e9, enc.size(),
+            trails.add(new Trail(p, ry, s.particles(), enc, meeting));
+            log.accept(String.format(Locale.ROOT, "trail %d: %d particles %s in %.1f s, %d crossings, %s", ry,
+                    s.particles(), resumed ? "read back from the saved run" : "propagated", (System.nanoTime() - tp) / 1e9,
+                    enc.size(),
                     meeting == null ? "too few near the Earth" : String.format(Locale.ROOT, "delta r %+.5f au",
                             meeting.deltaR())));
         }

@@ -57,4 +57,33 @@ class ForecastCommandTest {
         assertThat(c.code()).isEqualTo(Main.BAD_INPUT);
         assertThat(c.err()).contains("--since or --returns, not both");
     }
+
+    @Test
+    void resumeAfterACrashGivesTheSameTables() throws IOException {
+        String[] args = {"forecast", "streams/lysandre.toml", "--year", "2027", "--returns", "2", "--particles", "200",
+            "--out", dir.toString()};
+        MainTest.Run first = MainTest.run(args);
+        assertThat(first.code()).as(first.err()).isZero();
+        String encounters = Files.readString(dir.resolve("encounters.csv"));
+        String crossings = Files.readString(dir.resolve("crossings.csv"));
+        // A crash after the first trail: the second trail's checkpoint and the tables are gone.
+        try (var s = Files.list(dir.resolve("progress"))) {
+            Path second = s.filter(p -> p.getFileName().toString().startsWith("trail-")).sorted().toList().get(1);
+            Files.delete(second);
+        }
+        Files.delete(dir.resolve("encounters.csv"));
+        String[] resume = java.util.Arrays.copyOf(args, args.length + 1);
+        resume[args.length] = "--resume";
+        MainTest.Run again = MainTest.run(resume);
+        assertThat(again.code()).as(again.err()).isZero();
+        assertThat(again.out()).contains("read back from the saved run").contains("propagated");
+        assertThat(Files.readString(dir.resolve("encounters.csv"))).isEqualTo(encounters);
+        assertThat(Files.readString(dir.resolve("crossings.csv"))).isEqualTo(crossings);
+        // Other settings do not mix with the saved run.
+        String[] other = resume.clone();
+        other[7] = "300";
+        MainTest.Run bad = MainTest.run(other);
+        assertThat(bad.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(bad.err()).contains("--resume:").contains("other settings");
+    }
 }
