@@ -128,7 +128,7 @@ public final class ForecastRun {
             List<NodeCrossing> crossings = checkpoint == null ? null : checkpoint.read(ry);
             boolean resumed = crossings != null;
             if (!resumed) {
-                ReturnCloud rc = ReturnCloud.prepare(stream, ephemeris, ry);
+                ReturnCloud rc = ReturnCloud.from(stream, ephemeris, returns.history(), p, ry);
                 List<Meteoroid> cloud = rc.generator().generate(s.particles(), s.seed() * 1_000_003L + ry, false,
                         s.threads());
                 try (Progress.Stage stage = progress.open("trail " + ry, cloud.size())) {

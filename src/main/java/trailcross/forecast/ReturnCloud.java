@@ -34,21 +34,9 @@ public record ReturnCloud(ParentHistory history, Perihelion perihelion, Particle
     public static ReturnCloud prepare(StreamDefinition stream, Ephemeris ephemeris, int year) {
         double from = ParentReturns.yearStart(year);
         double to = ParentReturns.yearStart(year + 1);
-        var el = stream.parent().elements();
-        EjectionSettings ej = stream.ejection();
-        double before;
-        double after;
-        if (ej.hasProductionTable()) {
-            double[] days = ej.productionTableDays();
-            before = Math.max(0, -days[0]);
-            after = Math.max(0, days[days.length - 1]);
-        } else {
-            before = ActiveArc.twoBodyDays(el, ej.activeInboundAu());
-            after = ActiveArc.twoBodyDays(el, ej.activeOutboundAu());
-        }
-        // Margins for the change of the orbit between the osculating epoch and the return.
-        double lo = from - 1.25 * before - 30;
-        double hi = to + 1.25 * after + 30;
+        double[] margin = margins(stream, stream.parent().elements());
+        double lo = from - margin[0];
+        double hi = to + margin[1];
         for (double t : new double[] {lo, hi, stream.parent().epoch().daysSinceJ2000()}) {
             ephemeris.checkSpan(t);
         }
@@ -61,7 +49,48 @@ public record ReturnCloud(ParentHistory history, Perihelion perihelion, Particle
                     year, stream.parent().name(), year, stream.source()));
         }
         Perihelion p = inYear.get(0);
-        ActiveArc arc = ActiveArc.find(h, p.t(), p.elements(), ej);
+        ActiveArc arc = ActiveArc.find(h, p.t(), p.elements(), stream.ejection());
         return new ReturnCloud(h, p, new ParticleGenerator(stream, h, arc));
+    }
+
+    /**
+     * One return made ready from a history already integrated (a forecast integrates the parent once over
+     * all its returns), or, when that history does not cover the return's active arc with margin, from a
+     * history of its own ({@link #prepare}).
+     *
+     * @param stream the stream
+     * @param ephemeris the planets
+     * @param history an integrated history
+     * @param p a perihelion found on it
+     * @param year the return's calendar year
+     * @return the prepared return
+     */
+    public static ReturnCloud from(StreamDefinition stream, Ephemeris ephemeris, ParentHistory history, Perihelion p,
+            int year) {
+        double[] margin = margins(stream, p.elements());
+        if (p.t() - margin[0] < history.first() || p.t() + margin[1] > history.last()) {
+            return prepare(stream, ephemeris, year);
+        }
+        ActiveArc arc = ActiveArc.find(history, p.t(), p.elements(), stream.ejection());
+        return new ReturnCloud(history, p, new ParticleGenerator(stream, history, arc));
+    }
+
+    /**
+     * How far before and after a perihelion the history must reach: the active arc's two-body length with
+     * 25% and 30 days to spare for the change of the orbit between the osculating epoch and the return.
+     */
+    private static double[] margins(StreamDefinition stream, trailcross.orbit.Elements el) {
+        EjectionSettings ej = stream.ejection();
+        double before;
+        double after;
+        if (ej.hasProductionTable()) {
+            double[] days = ej.productionTableDays();
+            before = Math.max(0, -days[0]);
+            after = Math.max(0, days[days.length - 1]);
+        } else {
+            before = ActiveArc.twoBodyDays(el, ej.activeInboundAu());
+            after = ActiveArc.twoBodyDays(el, ej.activeOutboundAu());
+        }
+        return new double[] {1.25 * before + 30, 1.25 * after + 30};
     }
 }
