@@ -102,8 +102,7 @@ final class RadiantsCommand implements Callable<Integer> {
             rows = RadiantTable.fromEncounters(enc, eph, step);
             source = r.crossings().size() + " crossings of " + particles.size() + " particles";
         } else {
-            TheoreticalRadiant.Adjustment adj = TheoreticalRadiant.Adjustment.of(adjustment).orElseThrow(() ->
-                    new IllegalArgumentException("--adjustment: unknown '" + adjustment + "' (translation, omega)"));
+            TheoreticalRadiant.Adjustment adj = TheoreticalRadiant.Adjustment.ofOption(adjustment);
             Elements orbit = orbitBefore(d, eph, year, dec31);
             Elements earth = EarthOrbit.at(eph, 0.5 * (jan1 + dec31));
             Moid.Minimum branch = Moid.minima(orbit, earth).get(0);

@@ -62,8 +62,7 @@ final class ReachCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        TheoreticalRadiant.Adjustment adj = TheoreticalRadiant.Adjustment.of(adjustment).orElseThrow(() ->
-                new IllegalArgumentException("--adjustment: unknown '" + adjustment + "' (translation, omega)"));
+        TheoreticalRadiant.Adjustment adj = TheoreticalRadiant.Adjustment.ofOption(adjustment);
         StreamDefinition d = StreamFileReader.read(stream);
         Ephemeris eph = Ephemerides.fast(ephemeris.file);
         double epoch = d.parent().epoch().daysSinceJ2000();

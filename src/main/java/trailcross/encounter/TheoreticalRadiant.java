@@ -64,6 +64,16 @@ public record TheoreticalRadiant(Moid.Minimum minimum, boolean ascending, double
             }
             return Optional.empty();
         }
+
+        /**
+         * @param key the value of {@code --adjustment}
+         * @return the adjustment
+         * @throws IllegalArgumentException naming the option and the accepted names
+         */
+        public static Adjustment ofOption(String key) {
+            return of(key).orElseThrow(() -> new IllegalArgumentException("--adjustment: unknown '" + key
+                    + "' (translation, omega)"));
+        }
     }
 
     /**
