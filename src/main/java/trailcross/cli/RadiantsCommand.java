@@ -82,8 +82,8 @@ final class RadiantsCommand implements Callable<Integer> {
         }
         StreamDefinition d = StreamFileReader.read(stream);
         Ephemeris eph = Ephemerides.fast(ephemeris.file);
-        double jan1 = EpochParser.parse(String.format(Locale.ROOT, "%04d-01-01T00:00:00 TDB", year)).daysSinceJ2000();
-        double dec31 = EpochParser.parse(String.format(Locale.ROOT, "%04d-01-01T00:00:00 TDB", year + 1)).daysSinceJ2000();
+        double jan1 = ParentReturns.yearStart(year);
+        double dec31 = ParentReturns.yearStart(year + 1);
         eph.checkSpan(jan1);
         eph.checkSpan(dec31);
         List<RadiantTable.Row> rows;

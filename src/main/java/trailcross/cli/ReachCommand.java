@@ -66,7 +66,7 @@ final class ReachCommand implements Callable<Integer> {
         StreamDefinition d = StreamFileReader.read(stream);
         Ephemeris eph = Ephemerides.fast(ephemeris.file);
         double epoch = d.parent().epoch().daysSinceJ2000();
-        int epochYear = Integer.parseInt(EpochFormat.iso(d.parent().epoch(), TimeScale.TDB, 0).substring(0, 4));
+        int epochYear = ParentReturns.yearOf(epoch);
         int from = since != null ? since : epochYear - 100;
         if (from > epochYear) {
             throw new IllegalArgumentException("--since " + from + " is after the parent's epoch (" + epochYear + ")");

@@ -92,7 +92,7 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
         }
         double returnT = met.get(0).crossing().returnT();
         double[] dr = met.stream().mapToDouble(Encounter::deltaR).toArray();
-        double deltaR = new DescriptiveStatistics(dr).getPercentile(50);
+        double deltaR = median(dr, null);
         // Longitudes unwrapped around the first one, so that a trail met at λ ≈ 0° stays continuous.
         double lon0 = met.get(0).solarLongitudeDeg();
         double[] lon = met.stream().mapToDouble(e -> lon0 + Math.toDegrees(Angles.difference(

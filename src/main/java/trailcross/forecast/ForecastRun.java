@@ -119,11 +119,11 @@ public final class ForecastRun {
                     stream.parent().name(), s.sinceYear(), s.year(), s.year()));
         }
         log.accept(String.format(Locale.ROOT, "%d returns since %d: %s", chosen.size(), s.sinceYear(),
-                String.join(", ", chosen.stream().map(p -> Integer.toString(yearOf(p.t()))).toList())));
+                String.join(", ", chosen.stream().map(p -> Integer.toString(ParentReturns.yearOf(p.t()))).toList())));
         double period = stream.parent().elements().period();
         List<Trail> trails = new ArrayList<>();
         for (Perihelion p : chosen) {
-            int ry = yearOf(p.t());
+            int ry = ParentReturns.yearOf(p.t());
             long tp = System.nanoTime();
             List<NodeCrossing> crossings = checkpoint == null ? null : checkpoint.read(ry);
             boolean resumed = crossings != null;
@@ -153,10 +153,5 @@ public final class ForecastRun {
                             meeting.deltaR())));
         }
         return new Result(s, trails, (System.nanoTime() - t0) / 1e9);
-    }
-
-    static int yearOf(double t) {
-        return Integer.parseInt(trailcross.time.EpochFormat.iso(trailcross.time.Epoch.ofDaysSinceJ2000(t),
-                trailcross.time.TimeScale.TDB, 0).substring(0, 4));
     }
 }

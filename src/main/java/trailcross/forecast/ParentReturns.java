@@ -45,8 +45,11 @@ public final class ParentReturns {
         return new Result(h, inSpan);
     }
 
-    /** @return Jan 1.0 TDB of a year, days since J2000 */
-    static double yearStart(int year) {
+    /**
+     * @param year a calendar year
+     * @return Jan 1.0 TDB of that year, days since J2000
+     */
+    public static double yearStart(int year) {
         return trailcross.time.EpochParser.parse(String.format(java.util.Locale.ROOT,
                 "%04d-01-01T00:00:00 TDB", year)).daysSinceJ2000();
     }
@@ -56,5 +59,14 @@ public final class ParentReturns {
      * @param returns the perihelia inside the span, in time order
      */
     public record Result(ParentHistory history, List<Perihelion> returns) {
+    }
+
+    /**
+     * @param t TDB days since J2000
+     * @return the calendar year (TDB) containing t
+     */
+    public static int yearOf(double t) {
+        return Integer.parseInt(trailcross.time.EpochFormat.iso(trailcross.time.Epoch.ofDaysSinceJ2000(t),
+                trailcross.time.TimeScale.TDB, 0).substring(0, 4));
     }
 }
