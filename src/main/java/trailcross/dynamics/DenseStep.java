@@ -3,8 +3,10 @@ package trailcross.dynamics;
 /**
  * One accepted step of {@link GaussRadau15} with its interpolating polynomial: a(τ) = a0 + Σ b_j τ^{j+1},
  * τ = (t − t0)/dt ∈ [0, 1], integrated twice analytically (Everhart 1985), so that positions and velocities
- * anywhere inside the step cost a polynomial evaluation, to the integrator's own accuracy. The arrays are
- * the integrator's: a handler that keeps a step must {@link #copy()} it.
+ * anywhere inside the step cost a polynomial evaluation, to the integrator's own accuracy. The polynomial is
+ * in the force model's coordinates; {@link #state} gives heliocentric states (shifting barycentric ones by
+ * the Sun's barycentric state at the same instant). The arrays are the integrator's: a handler that keeps a
+ * step must {@link #copy()} it.
  */
 public final class DenseStep {
 
@@ -15,6 +17,8 @@ public final class DenseStep {
     final double[] a0 = new double[3];
     /** b[j][k], j = 0..6, component k. */
     final double[][] b = new double[7][3];
+    /** The force model's {@link ForceModel#barycentricShift()}, or null. */
+    trailcross.ephemeris.Ephemeris shift;
 
     /** @return the step's start, TDB days since J2000 */
     public double start() {
@@ -37,6 +41,7 @@ public final class DenseStep {
      */
     public void state(double t, double[] out) {
         evaluate(x0, v0, a0, b, (t - t0) / dt, dt, out, out);
+        ForceModel.shift(shift, t, out, -1);
     }
 
     /**
@@ -69,6 +74,7 @@ public final class DenseStep {
         DenseStep c = new DenseStep();
         c.t0 = t0;
         c.dt = dt;
+        c.shift = shift;
         System.arraycopy(x0, 0, c.x0, 0, 3);
         System.arraycopy(v0, 0, c.v0, 0, 3);
         System.arraycopy(a0, 0, c.a0, 0, 3);

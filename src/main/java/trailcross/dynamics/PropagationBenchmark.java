@@ -15,10 +15,13 @@ import trailcross.orbit.Elements;
 
 /**
  * The standard propagation workload: Halley-type test particles (q ≈ 0.98 au, e ≈ 0.905, i ≈ 162.5°,
- * a ≈ 10.3 au, small spreads; seeded), Sun + planets + Earth + Moon + 1PN, 100 years backwards from
- * 2000. Measures particle-years per CPU-second (thread CPU time) and the final position error against a
- * reference run (Gauss–Radau at ε = 1e-10), itself cross-checked on a subset against Hipparchus's
- * Dormand–Prince 8(5,3) at tight tolerance: a reference counts only where two methods agree.
+ * a ≈ 10.3 au, small spreads; seeded), Sun + planets + Earth + Moon + 1PN (the default barycentric frame),
+ * 100 years backwards from 2000. Measures particle-years per CPU-second (thread CPU time) and the final
+ * position error against a reference run that shares neither the step criterion nor the tolerance with the
+ * measured one (Gauss–Radau with the timescale criterion at ε = 1e-16), itself cross-checked on a subset
+ * against Hipparchus's Gragg–Bulirsch–Stoer at tight tolerance: a reference counts only where two methods
+ * agree. (Hipparchus's DP853 is no reference here: in the barycentric frame its rounding holds it near
+ * 3e-9 au over this century at any tolerance; see {@code AgainstReferenceIntegratorsTest}.)
  */
 public final class PropagationBenchmark {
 
@@ -33,7 +36,7 @@ public final class PropagationBenchmark {
         }
     }
 
-    /** The reference cross-check: how far the reference is from DP853 on the subset. */
+    /** The reference cross-check: how far the reference is from GBS on the subset. */
     public record ReferenceCheck(int particles, double medianAu, double maxAu) {
     }
 

@@ -10,7 +10,8 @@ import org.hipparchus.ode.nonstiff.GraggBulirschStoerIntegrator;
 /**
  * Hipparchus's general-purpose integrators on the same force model, as first-order systems: Dormand–Prince
  * 8(5,3) (Hairer, Nørsett &amp; Wanner 1993) and Gragg–Bulirsch–Stoer extrapolation. They are the reference
- * the Gauss–Radau integrator is checked against, and an {@code --integrator} choice.
+ * the Gauss–Radau integrator is checked against, and an {@code --integrator} choice. States in and out are
+ * heliocentric; the integration runs in the force model's own coordinates.
  */
 public final class ReferenceIntegrator {
 
@@ -67,7 +68,11 @@ public final class ReferenceIntegrator {
                 return new double[] {y[3], y[4], y[5], a[0], a[1], a[2]};
             }
         };
-        ODEStateAndDerivative end = integrator.integrate(ode, new ODEState(t0, state.clone()), tEnd);
-        return end.getPrimaryState();
+        double[] start = state.clone();
+        force.toModel(t0, start);
+        ODEStateAndDerivative end = integrator.integrate(ode, new ODEState(t0, start), tEnd);
+        double[] out = end.getPrimaryState();
+        force.toHeliocentric(tEnd, out);
+        return out;
     }
 }

@@ -3,40 +3,67 @@ package trailcross.ephemeris;
 import java.util.concurrent.atomic.AtomicReferenceArray;
 
 /**
- * A fast stand-in for a slow ephemeris: each body's heliocentric position is fitted, block by block, by a
- * Chebyshev series on Chebyshev–Gauss nodes (the interpolation JPL's own ephemerides use; Newhall 1989,
- * Celest. Mech. 45, 305), and velocities are the derivative of the fit. Blocks are fitted lazily on first
- * use, thread-safely (a block computed twice by two threads is the same block), and kept.
+ * A fast stand-in for a slow ephemeris: each body's position is interpolated, block by block, by a Chebyshev
+ * series on the Chebyshev–Gauss–Lobatto points (Trefethen 2013, <i>Approximation Theory and Approximation
+ * Practice</i>, ch. 3–4; JPL's own ephemerides are Chebyshev blocks too, Newhall 1989, Celest. Mech. 45, 305),
+ * and velocities are the derivative of the series. The Lobatto points include both ends of a block, so two
+ * adjacent blocks take the same source value at their shared end: positions are continuous across block
+ * boundaries up to rounding ({@link #JUMP_BOUND_AU}), which an adaptive integrator needs (a jump in the
+ * forces cannot be resolved by shrinking the step). Blocks are fitted lazily on first use, thread-safely (a
+ * block computed twice by two threads is the same block), and kept.
  *
- * <p>Fitted items: the eight planets (the Earth as the Earth–Moon barycentre, which is smooth) and the
- * geocentric Moon; the Earth and the Moon follow from those two with EMRAT, the Sun's barycentric offset
- * from the planets' masses. Block lengths and degrees per item were chosen so that the fit stays within
- * 1e-10 au of the source everywhere (measured in the tests).
+ * <p>Fitted items: the eight planets (the Earth as the Earth–Moon barycentre, which is smooth), the
+ * geocentric Moon, and the Sun's offset from the barycentre of the Sun and those eight planets with their
+ * DE440 masses (fitted from this cache's own planets, so that a barycentric integration sees the barycentre
+ * of exactly the planets it is perturbed by). The Earth and the Moon follow from the barycentre and the
+ * geocentric Moon with EMRAT. Block lengths and degrees per item were chosen so that the fit stays within
+ * {@link #FIT_BOUND_AU} of the source everywhere (measured in the tests).
+ *
+ * <p>Hot loops call through a {@link Cursor}, one per thread, which remembers each item's current block;
+ * the cache's own calls use a cursor per calling thread.
  */
 public final class ChebyshevCache implements Ephemeris {
 
-    /** Bound on the fit's error against its source, au (measured in the tests, 5e-11): adjacent blocks differ by at most twice it. */
+    /** Bound on the fit's error against its source, au (measured in the tests, 5e-11). */
     public static final double FIT_BOUND_AU = 1e-10;
+    /**
+     * Bound on a position's jump between adjacent blocks, au: the rounding of two series evaluations at the
+     * shared end (measured in the tests: 5e-14 au, some fifteen ulp of an outer planet's distance).
+     */
+    public static final double JUMP_BOUND_AU = 1e-13;
 
-    /** The fitted items, in order; {@link #MOON_ITEM} is the geocentric Moon. */
+    /** The fitted items, in order; {@link #MOON_ITEM} is the geocentric Moon, {@link #SUN_ITEM} the barycentric Sun. */
     private static final Body[] ITEMS = {
         Body.MERCURY, Body.VENUS, Body.EARTH_MOON_BARYCENTRE, Body.MARS, Body.JUPITER, Body.SATURN,
-        Body.URANUS, Body.NEPTUNE, Body.MOON
+        Body.URANUS, Body.NEPTUNE, Body.MOON, Body.SUN
     };
     private static final int MOON_ITEM = 8;
+    private static final int SUN_ITEM = 9;
     private static final int EMB_ITEM = 2;
-    /** Block length in days, per item. */
-    private static final double[] LENGTH = {16, 32, 8, 32, 32, 32, 32, 16, 8};
-    /** Number of Chebyshev coefficients per component, per item. */
-    private static final int[] COEFFS = {14, 13, 12, 13, 14, 14, 14, 13, 15};
-    /** The largest entry of {@link #COEFFS}, the size of the scratch array of T_k. */
-    private static final int MAX_COEFFS = 15;
+    private static final int PLANETS = 8;
+    /** Block length in days, per item (powers of two, so that 2/length is exact). */
+    private static final double[] LENGTH = {8, 32, 8, 32, 32, 32, 32, 16, 8, 32};
+    /**
+     * Number of Chebyshev coefficients per component, per item: the fewest that bring the interpolation to
+     * the series' own evaluation noise (~2e-11 au; measured over 60 random blocks in 1000–3000 AD: Mercury
+     * 4.4e-11 au, the Moon 5e-12 au, the others 3e-12 … 2.5e-11 au).
+     */
+    private static final int[] COEFFS = {11, 11, 11, 11, 11, 11, 11, 11, 13, 13};
+    /** The largest entry of {@link #COEFFS}. */
+    private static final int MAX_COEFFS = 13;
+    /**
+     * Items in the order a cursor evaluates them: grouped by block length, so that the Chebyshev
+     * polynomials T_k(x) of one block position serve every item of the group.
+     */
+    private static final int[] EVALUATION_ORDER = {0, EMB_ITEM, MOON_ITEM, 7, 1, 3, 4, 5, 6};
 
     /** The bodies of {@link #heliocentricAll}, in its output order. */
     public static final Body[] ALL = {
         Body.MERCURY, Body.VENUS, Body.EARTH, Body.MOON, Body.MARS, Body.JUPITER, Body.SATURN, Body.URANUS,
         Body.NEPTUNE
     };
+    /** Where each item's position goes in {@link #heliocentricAll}'s output (EMB and Moon are split after). */
+    private static final int[] SLOT = {0, 1, 2, 4, 5, 6, 7, 8, 3};
 
     private static final double MOON_FRACTION = 1 / (1 + Body.Constants.EMRAT);
 
@@ -46,9 +73,10 @@ public final class ChebyshevCache implements Ephemeris {
     private final AtomicReferenceArray<double[]>[] blocks;
     private final double[][] nodes;
     private final double[][][] cosines;
-    private final double massTotal;
+    private final double[] massWeight = new double[PLANETS];
     /** The last block of each item (the span's last instant belongs to it, not to the block after). */
     private final int[] lastIndex = new int[ITEMS.length];
+    private final ThreadLocal<Cursor> cursors = ThreadLocal.withInitial(Cursor::new);
 
     /**
      * @param source the ephemeris to fit (its span becomes this cache's span)
@@ -70,14 +98,14 @@ public final class ChebyshevCache implements Ephemeris {
         nodes = new double[ITEMS.length][];
         cosines = new double[ITEMS.length][][];
         for (int i = 0; i < ITEMS.length; i++) {
-            int count = (int) Math.ceil((last - origin) / LENGTH[i]) + 1;
-            blocks[i] = new AtomicReferenceArray<>(count);
+            blocks[i] = new AtomicReferenceArray<>(lastIndex[i] + 1);
             int n = COEFFS[i];
             nodes[i] = new double[n];
             cosines[i] = new double[n][n];
             for (int j = 0; j < n; j++) {
-                double theta = Math.PI * (j + 0.5) / n;
-                nodes[i][j] = Math.cos(theta);
+                double theta = Math.PI * j / (n - 1);
+                // Exact ±1 at the ends, so that the end nodes fall on the block boundaries.
+                nodes[i][j] = j == 0 ? 1.0 : j == n - 1 ? -1.0 : Math.cos(theta);
                 for (int k = 0; k < n; k++) {
                     cosines[i][k][j] = Math.cos(k * theta);
                 }
@@ -87,12 +115,14 @@ public final class ChebyshevCache implements Ephemeris {
         for (Body b : Body.MASSIVE_PLANETS) {
             m += b.gm();
         }
-        massTotal = m;
+        for (int i = 0; i < PLANETS; i++) {
+            massWeight[i] = ITEMS[i].gm() / m;
+        }
     }
 
     @Override
     public double discontinuityAu() {
-        return 2 * FIT_BOUND_AU;
+        return JUMP_BOUND_AU;
     }
 
     @Override
@@ -110,56 +140,56 @@ public final class ChebyshevCache implements Ephemeris {
         return last;
     }
 
+    /** @return a new cursor: fast calls for one thread at a time */
+    public Cursor cursor() {
+        return new Cursor();
+    }
+
     @Override
     public void heliocentric(Body body, double t, double[] out) {
         checkSpan(t);
+        Cursor c = cursors.get();
         switch (body) {
             case SUN -> java.util.Arrays.fill(out, 0, 6, 0.0);
             case EARTH, MOON -> {
-                double[] pair = new double[12];
-                double[] tk = new double[MAX_COEFFS];
-                evaluate(EMB_ITEM, t, pair, 0, tk, 6);
-                evaluate(MOON_ITEM, t, pair, 6, tk, 6);
+                double[] pair = c.pair;
+                c.item(EMB_ITEM, t, pair, 0, 6);
+                c.item(MOON_ITEM, t, pair, 6, 6);
                 splitEarthMoon(pair, 0, 6, 6);
                 System.arraycopy(pair, body == Body.EARTH ? 0 : 6, out, 0, 6);
             }
-            default -> evaluate(itemOf(body), t, out, 0, new double[MAX_COEFFS], 6);
+            default -> c.item(itemOf(body), t, out, 0, 6);
         }
     }
 
     /**
-     * The heliocentric states of every body of {@link #ALL} at once, the call a force model makes each step.
+     * The heliocentric states of every body of {@link #ALL} at once.
      *
      * @param t TDB days since J2000
      * @param out receives 6 numbers per body, in the order of {@link #ALL} (length ≥ 54)
      */
     public void heliocentricAll(double t, double[] out) {
-        allBodies(t, out, 6);
+        cursors.get().heliocentricAll(t, out);
     }
 
     /**
-     * The heliocentric positions (no velocities) of every body of {@link #ALL}: what a force model needs,
-     * at half the cost of {@link #heliocentricAll}.
+     * The heliocentric positions (no velocities) of every body of {@link #ALL}.
      *
      * @param t TDB days since J2000
      * @param out receives 3 numbers per body, in the order of {@link #ALL} (length ≥ 27)
      */
     public void heliocentricPositionsAll(double t, double[] out) {
-        allBodies(t, out, 3);
+        cursors.get().heliocentricPositionsAll(t, out);
     }
 
-    /** Every body of {@link #ALL}, {@code width} numbers each (3: positions, 6: states). */
-    private void allBodies(double t, double[] out, int width) {
+    /**
+     * The Sun's offset from the barycentre of the Sun and the eight planets (DE440 masses), from its own
+     * fitted item.
+     */
+    @Override
+    public void sunBarycentric(double t, double[] out) {
         checkSpan(t);
-        double[] tk = new double[MAX_COEFFS];
-        evaluate(0, t, out, 0, tk, width);
-        evaluate(1, t, out, width, tk, width);
-        evaluate(EMB_ITEM, t, out, 2 * width, tk, width);
-        evaluate(MOON_ITEM, t, out, 3 * width, tk, width);
-        splitEarthMoon(out, 2 * width, 3 * width, width);
-        for (int i = 3; i < 8; i++) {
-            evaluate(i, t, out, width * (i + 1), tk, width);
-        }
+        cursors.get().item(SUN_ITEM, t, out, 0, 6);
     }
 
     /**
@@ -175,23 +205,8 @@ public final class ChebyshevCache implements Ephemeris {
         }
     }
 
-    @Override
-    public void sunBarycentric(double t, double[] out) {
-        checkSpan(t);
-        double[] s = new double[6];
-        double[] tk = new double[MAX_COEFFS];
-        java.util.Arrays.fill(out, 0, 6, 0.0);
-        for (int i = 0; i < 8; i++) {
-            evaluate(i, t, s, 0, tk, 6);
-            double w = ITEMS[i].gm() / massTotal;
-            for (int k = 0; k < 6; k++) {
-                out[k] -= w * s[k];
-            }
-        }
-    }
-
     private static int itemOf(Body body) {
-        for (int i = 0; i < MOON_ITEM; i++) {
+        for (int i = 0; i < PLANETS; i++) {
             if (ITEMS[i] == body) {
                 return i;
             }
@@ -199,85 +214,67 @@ public final class ChebyshevCache implements Ephemeris {
         throw new AssertionError(body);
     }
 
-    /**
-     * Position (width 3) or position and velocity (width 6) of item i at t, from its block's Chebyshev
-     * series: T_k(x) once, then dot products with the position coefficients and, for velocities, with the
-     * derivative's coefficients stored with the block.
-     */
-    private void evaluate(int i, double t, double[] out, int offset, double[] tk, int width) {
-        double[] c = block(i, t, tk);
-        int n = COEFFS[i];
-        double px = 0;
-        double py = 0;
-        double pz = 0;
-        for (int k = 0, j = 0; k < n; k++, j += 6) {
-            double tv = tk[k];
-            px += c[j] * tv;
-            py += c[j + 1] * tv;
-            pz += c[j + 2] * tv;
-        }
-        out[offset] = px;
-        out[offset + 1] = py;
-        out[offset + 2] = pz;
-        if (width == 6) {
-            double vx = 0;
-            double vy = 0;
-            double vz = 0;
-            for (int k = 0, j = 3; k < n; k++, j += 6) {
-                double tv = tk[k];
-                vx += c[j] * tv;
-                vy += c[j + 1] * tv;
-                vz += c[j + 2] * tv;
-            }
-            out[offset + 3] = vx;
-            out[offset + 4] = vy;
-            out[offset + 5] = vz;
-        }
+    /** The block of item i with the given index, fitted on first use. */
+    private double[] block(int i, int index) {
+        double[] c = blocks[i].get(index);
+        return c != null ? c : fit(i, index);
     }
 
-    /**
-     * The coefficients of item i's block containing t, with T_0(x) … T_{n−1}(x) of t's position in the
-     * block written into tk.
-     */
-    private double[] block(int i, double t, double[] tk) {
-        double length = LENGTH[i];
-        int index = Math.min((int) ((t - origin) / length), lastIndex[i]);
-        double[] c = blocks[i].get(index);
-        if (c == null) {
-            c = fit(i, index);
+    /** The start of block {@code index} of item i (the one expression every caller uses). */
+    private double blockStart(int i, int index) {
+        return origin + index * LENGTH[i];
+    }
+
+    /** The index of item i's block holding t: [start, start + length), the last block closed at the span's end. */
+    private int indexOf(int i, double t) {
+        int index = Math.min(Math.max((int) ((t - origin) / LENGTH[i]), 0), lastIndex[i]);
+        // The division may round across a boundary; settle on the block whose [start, end) holds t.
+        while (index > 0 && t < blockStart(i, index)) {
+            index--;
         }
-        int n = COEFFS[i];
-        double x = 2 * (t - origin - index * length) / length - 1;
-        double x2 = 2 * x;
-        tk[0] = 1;
-        tk[1] = x;
-        for (int k = 2; k < n; k++) {
-            tk[k] = x2 * tk[k - 1] - tk[k - 2];
+        while (index < lastIndex[i] && t >= blockStart(i, index + 1)) {
+            index++;
         }
-        return c;
+        return index;
     }
 
     private double[] fit(int i, int index) {
         int n = COEFFS[i];
         double length = LENGTH[i];
-        double start = origin + index * length;
+        double start = blockStart(i, index);
+        double a = start;
+        double b = start + length;
         double[][] values = new double[n][3];
+        double[] planet = new double[6];
+        Cursor own = i == SUN_ITEM ? new Cursor() : null;
         for (int j = 0; j < n; j++) {
-            double t = start + 0.5 * length * (nodes[i][j] + 1);
+            double t = j == 0 ? b : j == n - 1 ? a : a + 0.5 * length * (nodes[i][j] + 1);
             if (i == MOON_ITEM) {
                 source.moonGeocentricPosition(t, values[j]);
+            } else if (i == SUN_ITEM) {
+                for (int p = 0; p < PLANETS; p++) {
+                    own.item(p, t, planet, 0, 3);
+                    for (int k = 0; k < 3; k++) {
+                        values[j][k] -= massWeight[p] * planet[k];
+                    }
+                }
             } else {
                 source.heliocentricPosition(ITEMS[i], t, values[j]);
             }
         }
+        // Interpolation on the Lobatto points x_j = cos(πj/N), N = n − 1 (discrete cosine transform of type I):
+        // c_k = (2/N) Σ'' f_j cos(πjk/N), the end terms halved in the sum, and c_0, c_N halved.
+        int big = n - 1;
         double[] c = new double[6 * n];
         for (int comp = 0; comp < 3; comp++) {
             for (int k = 0; k < n; k++) {
                 double sum = 0;
                 for (int j = 0; j < n; j++) {
-                    sum += values[j][comp] * cosines[i][k][j];
+                    double w = j == 0 || j == big ? 0.5 : 1.0;
+                    sum += w * values[j][comp] * cosines[i][k][j];
                 }
-                c[comp * n + k] = (k == 0 ? 1.0 : 2.0) * sum / n;
+                double ck = 2 * sum / big;
+                c[comp * n + k] = k == 0 || k == big ? 0.5 * ck : ck;
             }
             // Derivative series: d_{k-1} = d_{k+1} + 2 k c_k (d_n = d_{n+1} = 0), d_0 halved; then d/dt = (2/L) d/dx.
             int v = (3 + comp) * n;
@@ -295,17 +292,141 @@ public final class ChebyshevCache implements Ephemeris {
                 c[v + k] *= 2 / length;
             }
         }
-        // Interleave as {px, py, pz, vx, vy, vz} per k, the order evaluate() reads them in.
+        // Interleave as {px, py, pz, vx, vy, vz} per k, the order a cursor reads them in.
         double[] interleaved = new double[6 * n];
         for (int m = 0; m < 6; m++) {
             for (int k = 0; k < n; k++) {
                 interleaved[6 * k + m] = c[m * n + k];
             }
         }
-        c = interleaved;
-        if (blocks[i].compareAndSet(index, null, c)) {
-            return c;
+        if (blocks[i].compareAndSet(index, null, interleaved)) {
+            return interleaved;
         }
         return blocks[i].get(index);
+    }
+
+    /**
+     * Fast calls on the cache for one thread: it remembers each item's current block (its coefficients and
+     * span), so that consecutive calls close in time, an integrator's, skip the block lookup, and it reuses
+     * T_k(x) across the items that share a block length. Results equal the cache's own calls bit for bit.
+     * Not thread-safe: one cursor per thread.
+     */
+    public final class Cursor {
+
+        private final double[][] coefficients = new double[ITEMS.length][];
+        private final double[] low = new double[ITEMS.length];
+        private final double[] high = new double[ITEMS.length];
+        private final double[] tk = new double[MAX_COEFFS];
+        private final double[] pair = new double[12];
+        /** The block start and length T_k in {@link #tk} were computed for (NaN: none). */
+        private double tkStart = Double.NaN;
+        private double tkLength = Double.NaN;
+        private double tkTime = Double.NaN;
+
+        private Cursor() {
+            java.util.Arrays.fill(low, Double.NaN);
+            java.util.Arrays.fill(high, Double.NaN);
+        }
+
+        /**
+         * @param t TDB days since J2000
+         * @param out receives 3 numbers per body, in the order of {@link #ALL} (length ≥ 27)
+         */
+        public void heliocentricPositionsAll(double t, double[] out) {
+            all(t, out, 3);
+        }
+
+        /**
+         * @param t TDB days since J2000
+         * @param out receives 6 numbers per body, in the order of {@link #ALL} (length ≥ 54)
+         */
+        public void heliocentricAll(double t, double[] out) {
+            all(t, out, 6);
+        }
+
+        /**
+         * @param t TDB days since J2000
+         * @param out receives the Sun's barycentric x, y, z, vx, vy, vz (see {@link ChebyshevCache#sunBarycentric})
+         */
+        public void sunBarycentric(double t, double[] out) {
+            checkSpan(t);
+            item(SUN_ITEM, t, out, 0, 6);
+        }
+
+        private void all(double t, double[] out, int width) {
+            checkSpan(t);
+            for (int i : EVALUATION_ORDER) {
+                item(i, t, out, width * SLOT[i], width);
+            }
+            splitEarthMoon(out, 2 * width, 3 * width, width);
+        }
+
+        /** Position (width 3) or state (width 6) of item i at t into out[offset …]. */
+        void item(int i, double t, double[] out, int offset, int width) {
+            double[] c = coefficients[i];
+            if (!(t >= low[i] && t < high[i])) {
+                int index = indexOf(i, t);
+                c = block(i, index);
+                coefficients[i] = c;
+                low[i] = blockStart(i, index);
+                high[i] = index == lastIndex[i] ? Double.POSITIVE_INFINITY : blockStart(i, index + 1);
+            }
+
+
+            int n = COEFFS[i];
+            double start = low[i];
+            double length = LENGTH[i];
+            if (t != tkTime || start != tkStart || length != tkLength) {
+                double x = (t - start) * (2 / length) - 1;
+                double x2 = 2 * x;
+                tk[0] = 1;
+                tk[1] = x;
+                for (int k = 2; k < MAX_COEFFS; k++) {
+                    tk[k] = x2 * tk[k - 1] - tk[k - 2];
+                }
+                tkTime = t;
+                tkStart = start;
+                tkLength = length;
+            }
+            // Positions and velocities in one pass: six independent sums, so that the additions do not wait
+            // on one another (fused multiply-adds, one rounding each). The position sums are the same in both
+            // branches, bit for bit.
+            if (width == 6) {
+                double px = 0;
+                double py = 0;
+                double pz = 0;
+                double vx = 0;
+                double vy = 0;
+                double vz = 0;
+                for (int k = 0, j = 0; k < n; k++, j += 6) {
+                    double tv = tk[k];
+                    px = Math.fma(c[j], tv, px);
+                    py = Math.fma(c[j + 1], tv, py);
+                    pz = Math.fma(c[j + 2], tv, pz);
+                    vx = Math.fma(c[j + 3], tv, vx);
+                    vy = Math.fma(c[j + 4], tv, vy);
+                    vz = Math.fma(c[j + 5], tv, vz);
+                }
+                out[offset] = px;
+                out[offset + 1] = py;
+                out[offset + 2] = pz;
+                out[offset + 3] = vx;
+                out[offset + 4] = vy;
+                out[offset + 5] = vz;
+            } else {
+                double px = 0;
+                double py = 0;
+                double pz = 0;
+                for (int k = 0, j = 0; k < n; k++, j += 6) {
+                    double tv = tk[k];
+                    px = Math.fma(c[j], tv, px);
+                    py = Math.fma(c[j + 1], tv, py);
+                    pz = Math.fma(c[j + 2], tv, pz);
+                }
+                out[offset] = px;
+                out[offset + 1] = py;
+                out[offset + 2] = pz;
+            }
+        }
     }
 }

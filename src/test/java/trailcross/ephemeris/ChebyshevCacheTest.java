@@ -74,6 +74,97 @@ class ChebyshevCacheTest {
     }
 
     @Test
+    void blocksJoinWithoutAJump() {
+        // Lobatto interpolation takes the source's own value at both ends of a block, so the two blocks meeting
+        // at a boundary agree there up to rounding: the jump is measured just left and right of boundaries
+        // (multiples of 8 days are boundaries of every item), the motion over that one-ulp gap taken out.
+        ChebyshevCache cache = new ChebyshevCache(SERIES);
+        ChebyshevCache.Cursor cursor = cache.cursor();
+        double worst = 0;
+        double[] left = new double[54];
+        double[] right = new double[54];
+        double[] sunLeft = new double[6];
+        double[] sunRight = new double[6];
+        for (int m = 1; m < 400; m++) {
+            double tb = cache.firstDay() + 8.0 * 911 * m;
+            if (tb >= cache.lastDay()) {
+                break;
+            }
+            double tl = Math.nextDown(tb);
+            cursor.heliocentricAll(tl, left);
+            cursor.heliocentricAll(tb, right);
+            cursor.sunBarycentric(tl, sunLeft);
+            cursor.sunBarycentric(tb, sunRight);
+            for (int i = 0; i <= ChebyshevCache.ALL.length; i++) {
+                double[] l = i < ChebyshevCache.ALL.length ? left : sunLeft;
+                double[] r = i < ChebyshevCache.ALL.length ? right : sunRight;
+                int o = i < ChebyshevCache.ALL.length ? 6 * i : 0;
+                double j2 = 0;
+                for (int k = 0; k < 3; k++) {
+                    j2 += sq(r[o + k] - l[o + k] - r[o + 3 + k] * (tb - tl));
+                }
+                worst = Math.max(worst, Math.sqrt(j2));
+            }
+        }
+        System.out.printf("cache: largest jump between blocks %.2e au%n", worst);
+        assertThat(worst).isLessThan(ChebyshevCache.JUMP_BOUND_AU);
+        assertThat(cache.discontinuityAu()).isEqualTo(ChebyshevCache.JUMP_BOUND_AU);
+    }
+
+    @Test
+    void cursorsAnswerLikeTheCacheWhateverTheirHistory() {
+        // A cursor remembers blocks; its answers must not depend on what it was asked before.
+        ChebyshevCache cache = new ChebyshevCache(SERIES);
+        ChebyshevCache.Cursor forward = cache.cursor();
+        ChebyshevCache.Cursor jumping = cache.cursor();
+        Random rnd = new Random(11);
+        double[] a = new double[54];
+        double[] b = new double[54];
+        double[] c = new double[54];
+        for (int k = 0; k < 2000; k++) {
+            double t = 3000 + k * 0.37;
+            jumping.heliocentricAll(cache.firstDay() + rnd.nextDouble() * (cache.lastDay() - cache.firstDay()), c);
+            forward.heliocentricAll(t, a);
+            jumping.heliocentricAll(t, b);
+            assertThat(b).containsExactly(a);
+            cache.heliocentricAll(t, c);
+            assertThat(c).containsExactly(a);
+        }
+    }
+
+    @Test
+    void sunIsTheBarycentreOfTheCachedPlanets() {
+        // The Sun's item is fitted from the cache's own planets: it must equal −Σ m_j r_j / M (DE440 masses),
+        // summed directly, to well below the planets' own fit bound; and the series' barycentric Sun to 1e-12.
+        ChebyshevCache cache = new ChebyshevCache(SERIES);
+        double total = Body.SUN.gm();
+        for (Body p : Body.MASSIVE_PLANETS) {
+            total += p.gm();
+        }
+        Random rnd = new Random(5);
+        double worst = 0;
+        double worstVelocity = 0;
+        for (int k = 0; k < 200; k++) {
+            double t = -36525 + rnd.nextDouble() * 73050;
+            double[] sum = new double[6];
+            double[] s = new double[6];
+            for (Body p : Body.MASSIVE_PLANETS) {
+                cache.heliocentric(p, t, s);
+                for (int m = 0; m < 6; m++) {
+                    sum[m] -= p.gm() / total * s[m];
+                }
+            }
+            double[] sun = new double[6];
+            cache.sunBarycentric(t, sun);
+            worst = Math.max(worst, Math.sqrt(sq(sun[0] - sum[0]) + sq(sun[1] - sum[1]) + sq(sun[2] - sum[2])));
+            worstVelocity = Math.max(worstVelocity, Math.sqrt(sq(sun[3] - sum[3]) + sq(sun[4] - sum[4]) + sq(sun[5] - sum[5])));
+        }
+        System.out.printf("cache: barycentric Sun vs its planets %.2e au, %.2e au/d%n", worst, worstVelocity);
+        assertThat(worst).isLessThan(3e-13);
+        assertThat(worstVelocity).isLessThan(2e-13);
+    }
+
+    @Test
     void threadsSeeTheSameBlocks() throws Exception {
         // Lazy fitting from several threads at once gives bit-identical answers.
         ChebyshevCache shared = new ChebyshevCache(SERIES);
