@@ -79,17 +79,17 @@ public final class PropagationBenchmark {
     }
 
     /**
-     * Runs the reference (all particles) and its DP853 cross-check on {@code checkCount} of them.
+     * Runs the reference (all particles) and its GBS cross-check on {@code checkCount} of them.
      *
      * @param threads threads for the reference run
-     * @param checkCount particles cross-checked with DP853
+     * @param checkCount particles cross-checked with GBS
      * @return the cross-check
      */
     public ReferenceCheck reference(int threads, int checkCount) throws Exception {
-        reference = run(threads, k -> new GaussRadau15(1e-10, 1e4).integrate(forces.create(0), 0, particles.get(k).state(),
-                tEnd, null).state(), particles.size()).states;
+        reference = run(threads, k -> new GaussRadau15(1e-16, 1e4, GaussRadau15.Criterion.TIMESCALE)
+                .integrate(forces.create(0), 0, particles.get(k).state(), tEnd, null).state(), particles.size()).states;
         int n = Math.min(checkCount, particles.size());
-        double[][] dp = run(threads, k -> new ReferenceIntegrator(ReferenceIntegrator.Kind.DP853, 1e-16, 1e-14)
+        double[][] dp = run(threads, k -> new ReferenceIntegrator(ReferenceIntegrator.Kind.GBS, 1e-16, 1e-14)
                 .integrate(forces.create(0), 0, particles.get(k).state(), tEnd), n).states;
         double[] d = new double[n];
         for (int k = 0; k < n; k++) {
