@@ -35,8 +35,12 @@ final class BenchCommand implements Callable<Integer> {
     int particles;
 
     @Option(names = "--check", defaultValue = "20", paramLabel = "N",
-            description = "propagate: particles on which the reference run is cross-checked with DP853")
+            description = "propagate: particles on which the reference run is cross-checked with Hipparchus GBS")
     int check;
+
+    @Option(names = "--epsilon", defaultValue = "1e-8", paramLabel = "EPS",
+            description = "propagate: Gauss-Radau's accuracy parameter (default 1e-8, the forecast's)")
+    double epsilon;
 
     @Override
     public Integer call() throws Exception {
@@ -59,8 +63,8 @@ final class BenchCommand implements Callable<Integer> {
         trailcross.dynamics.PropagationBenchmark bench = new trailcross.dynamics.PropagationBenchmark(
                 new trailcross.dynamics.ForceModelFactory(trailcross.ephemeris.Ephemerides.fast(null), true, true),
                 particles, 1);
-        out.printf(Locale.ROOT, "propagate: %d Halley-type particles, Sun + planets + Earth + Moon + 1PN, 100 years%n",
-                particles);
+        out.printf(Locale.ROOT, "propagate: %d Halley-type particles, Sun + planets + Earth + Moon + 1PN, 100 years; "
+                + "Gauss-Radau eps %.0e%n", particles, epsilon);
         out.flush();
         int refThreads = Arrays.stream(threads).max().orElse(1);
         trailcross.dynamics.PropagationBenchmark.ReferenceCheck rc = bench.reference(refThreads, check);
@@ -71,7 +75,7 @@ final class BenchCommand implements Callable<Integer> {
         StringBuilder lines = new StringBuilder();
         for (String integrator : new String[] {"gauss-radau", "dp853"}) {
             for (int n : threads) {
-                trailcross.dynamics.PropagationBenchmark.Figure f = bench.measure(integrator, n);
+                trailcross.dynamics.PropagationBenchmark.Figure f = bench.measure(integrator, n, epsilon);
                 out.printf(Locale.ROOT, "%-12s %8d %22.1f %14.2e %14.2e %9.2f%n", f.integrator(), f.threads(),
                         f.particleYearsPerCpuSecond(), f.medianErrorAu(), f.maxErrorAu(), f.wallSeconds());
                 out.flush();

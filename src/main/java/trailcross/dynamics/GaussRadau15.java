@@ -38,12 +38,19 @@ public final class GaussRadau15 {
         0.734210177215410531523210605558, 0.885320946839095768090359771030,
         0.977520613561287501891174488626
     };
+    /** INVERSE_SPACING[n][m] = 1 / (h_n − h_m), m &lt; n (h_0 = 0): the divided differences' divisors. */
+    private static final double[][] INVERSE_SPACING = new double[8][8];
     /** C[k][j]: coefficient of τ^{j+1} in τ(τ − h_1)…(τ − h_k); b_j = Σ_{k ≥ j} C[k][j] g_k. */
     private static final double[][] C = new double[7][7];
     /** D = C⁻¹ in the sense g_k = Σ_{j ≥ k} D[k][j] b_j. */
     private static final double[][] D = new double[7][7];
 
     static {
+        for (int n = 1; n < 8; n++) {
+            for (int m = 0; m < n; m++) {
+                INVERSE_SPACING[n][m] = 1 / (H[n] - H[m]);
+            }
+        }
         for (int k = 0; k < 7; k++) {
             // Expand τ · Π_{m=1..k} (τ − h_m): poly[p] is the coefficient of τ^{p+1}.
             double[] poly = new double[8];
@@ -198,10 +205,11 @@ public final class GaussRadau15 {
                     substep(t, dt, H[n], force);
                     for (int k = 0; k < 3; k++) {
                         double f = a[k] - a0[k];
-                        // Newton divided differences for g_{n−1}.
-                        double gk = f / H[n];
+                        // Newton divided differences for g_{n−1} (multiplying by the reciprocal spacings).
+                        double[] inv = INVERSE_SPACING[n];
+                        double gk = f * inv[0];
                         for (int m = 1; m < n; m++) {
-                            gk = (gk - g[m - 1][k]) / (H[n] - H[m]);
+                            gk = (gk - g[m - 1][k]) * inv[m];
                         }
                         double delta = gk - g[n - 1][k];
                         g[n - 1][k] = gk;

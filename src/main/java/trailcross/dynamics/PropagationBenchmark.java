@@ -99,13 +99,23 @@ public final class PropagationBenchmark {
     }
 
     /**
-     * @param integrator "gauss-radau" (ε = 1e-9) or "dp853" (relative tolerance 1e-12)
+     * @param integrator "gauss-radau" (ε = 1e-9, IAS15's customary value) or "dp853" (relative tolerance 1e-12)
      * @param threads threads
      * @return the figure
      */
     public Figure measure(String integrator, int threads) throws Exception {
+        return measure(integrator, threads, 1e-9);
+    }
+
+    /**
+     * @param integrator "gauss-radau" or "dp853" (relative tolerance 1e-12)
+     * @param threads threads
+     * @param epsilon Gauss–Radau's ε
+     * @return the figure
+     */
+    public Figure measure(String integrator, int threads, double epsilon) throws Exception {
         Task task = switch (integrator) {
-            case "gauss-radau" -> k -> new GaussRadau15(1e-9, 1e4).integrate(forces.create(0), 0,
+            case "gauss-radau" -> k -> new GaussRadau15(epsilon, 1e4).integrate(forces.create(0), 0,
                     particles.get(k).state(), tEnd, null).state();
             case "dp853" -> k -> new ReferenceIntegrator(ReferenceIntegrator.Kind.DP853, 1e-14, 1e-12)
                     .integrate(forces.create(0), 0, particles.get(k).state(), tEnd);
