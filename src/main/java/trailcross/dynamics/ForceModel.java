@@ -50,10 +50,24 @@ public interface ForceModel {
      * @param sign +1 heliocentric → barycentric, −1 back
      */
     static void shift(Ephemeris shift, double t, double[] state, int sign) {
+        if (shift != null) {
+            shift(shift, t, state, sign, new double[6]);
+        }
+    }
+
+    /**
+     * {@link #shift(Ephemeris, double, double[], int)} with a caller's scratch array for the Sun's state.
+     *
+     * @param shift the ephemeris of {@link #barycentricShift()}, or null
+     * @param t TDB days since J2000
+     * @param state six numbers, changed in place
+     * @param sign +1 heliocentric → barycentric, −1 back
+     * @param sun scratch, six numbers
+     */
+    static void shift(Ephemeris shift, double t, double[] state, int sign, double[] sun) {
         if (shift == null) {
             return;
         }
-        double[] sun = new double[6];
         shift.sunBarycentric(t, sun);
         for (int k = 0; k < 6; k++) {
             state[k] += sign * sun[k];

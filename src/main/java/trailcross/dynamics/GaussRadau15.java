@@ -118,6 +118,8 @@ public final class GaussRadau15 {
     private final double[] x = new double[3];
     private final double[] v = new double[3];
     private final double[] a = new double[3];
+    private final double[] helioScratch = new double[6];
+    private final double[] sunScratch = new double[6];
 
     /**
      * @param epsilon the IAS15 accuracy parameter ε (1e-9 in Rein &amp; Spiegel 2015)
@@ -267,25 +269,28 @@ public final class GaussRadau15 {
             steps++;
             System.arraycopy(x, 0, x0, 0, 3);
             System.arraycopy(v, 0, v0, 0, 3);
-            double[] helio = heliocentric(force, t, x0, v0);
+            double[] helio = helioScratch;
+            System.arraycopy(x0, 0, helio, 0, 3);
+            System.arraycopy(v0, 0, helio, 3, 3);
+            ForceModel.shift(step.shift, t, helio, -1, sunScratch);
             double r = Math.sqrt(helio[0] * helio[0] + helio[1] * helio[1] + helio[2] * helio[2]);
             if (r < PhysicalConstants.SUN_RADIUS_AU) {
-                return new Outcome(Outcome.Status.HIT_SUN, t, helio, steps, rejected, "sun");
+                return new Outcome(Outcome.Status.HIT_SUN, t, helio.clone(), steps, rejected, "sun");
             }
             if (impact != null) {
-                return new Outcome(Outcome.Status.HIT_BODY, t, helio, steps, rejected, impact);
+                return new Outcome(Outcome.Status.HIT_BODY, t, helio.clone(), steps, rejected, impact);
             }
             if (r > escapeDistance) {
-                return new Outcome(Outcome.Status.ESCAPED, t, helio, steps, rejected, "");
+                return new Outcome(Outcome.Status.ESCAPED, t, helio.clone(), steps, rejected, "");
             }
             if (last) {
-                return new Outcome(Outcome.Status.DONE, t, helio, steps, rejected, "");
+                return new Outcome(Outcome.Status.DONE, t, helio.clone(), steps, rejected, "");
             }
             // A step control that keeps accepting steps below MIN_STEP is chasing something it cannot
             // resolve (a discontinuity in the forces): stop with a reason rather than run on without end.
             tinySteps = Math.abs(dt) < MIN_STEP ? tinySteps + 1 : 0;
             if (tinySteps > MAX_TINY_STEPS) {
-                return new Outcome(Outcome.Status.STEP_UNDERFLOW, t, helio, steps, rejected,
+                return new Outcome(Outcome.Status.STEP_UNDERFLOW, t, helio.clone(), steps, rejected,
                         "steps below " + MIN_STEP + " d");
             }
             predict(b, dtNew / dt);
