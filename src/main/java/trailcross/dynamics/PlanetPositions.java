@@ -35,6 +35,8 @@ final class PlanetPositions {
     /** Heliocentric distances of the bodies at the epoch of the last {@link #at} call. */
     double[] distances;
     private int next;
+    /** The slot {@link #positions} and {@link #sun} are from. */
+    private int current;
     /** Positions at the epoch of the last {@link #at} call: 3 per body. */
     double[] positions;
     /** The Sun's barycentric x, y, z, vx, vy, vz at the epoch of the last {@link #at} call. */
@@ -65,8 +67,12 @@ final class PlanetPositions {
      * @param t TDB days since J2000
      */
     void at(double t) {
+        if (times[current] == t) {
+            return; // the epoch just served: the force model and its planetary term ask in turn
+        }
         for (int s = 0; s < SLOTS; s++) {
             if (times[s] == t) {
+                current = s;
                 positions = positionSlots[s];
                 sun = sunSlots[s];
                 distances = distanceSlots[s];
@@ -74,6 +80,7 @@ final class PlanetPositions {
             }
         }
         int s = next;
+        times[s] = Double.NaN;
         next = (next + 1) % SLOTS;
         double[] p = positionSlots[s];
         double[] q = sunSlots[s];
@@ -105,6 +112,7 @@ final class PlanetPositions {
         q[2] = sz;
         // The slot's epoch is set last, so that a read that throws (outside the span) leaves no stale slot.
         times[s] = t;
+        current = s;
         positions = p;
         sun = q;
         distances = r;

@@ -45,13 +45,6 @@ public final class PlanetaryPerturbations implements Acceleration {
         }
     }
 
-    /**
-     * @param ephemeris the planets' source, heliocentric integration (with the indirect terms)
-     */
-    public PlanetaryPerturbations(Ephemeris ephemeris) {
-        this(ephemeris, new PlanetPositions(ephemeris), true);
-    }
-
     @Override
     public void add(double t, double[] x, double[] v, double[] a) {
         planets.at(t);
