@@ -237,7 +237,7 @@ public final class GaussRadau15 {
             if (Math.abs(dtNew / dt) < SAFETY) {
                 rejected++;
                 if (Math.abs(dtNew) < MIN_STEP) {
-                    return new Outcome(Outcome.Status.STEP_UNDERFLOW, t, heliocentric(force, t, x0, v0), steps,
+                    return new Outcome(Outcome.Status.STEP_UNDERFLOW, t, heliocentricStart(t).clone(), steps,
                             rejected, "");
                 }
                 // Redo from the same start with a shorter step: the predicted polynomial rescaled,
@@ -269,10 +269,7 @@ public final class GaussRadau15 {
             steps++;
             System.arraycopy(x, 0, x0, 0, 3);
             System.arraycopy(v, 0, v0, 0, 3);
-            double[] helio = helioScratch;
-            System.arraycopy(x0, 0, helio, 0, 3);
-            System.arraycopy(v0, 0, helio, 3, 3);
-            ForceModel.shift(step.shift, t, helio, -1, sunScratch);
+            double[] helio = heliocentricStart(t);
             double r = Math.sqrt(helio[0] * helio[0] + helio[1] * helio[1] + helio[2] * helio[2]);
             if (r < PhysicalConstants.SUN_RADIUS_AU) {
                 return new Outcome(Outcome.Status.HIT_SUN, t, helio.clone(), steps, rejected, "sun");
@@ -400,10 +397,11 @@ public final class GaussRadau15 {
         }
     }
 
-    /** The heliocentric state of model coordinates x, v at t. */
-    private static double[] heliocentric(ForceModel force, double t, double[] x, double[] v) {
-        double[] s = {x[0], x[1], x[2], v[0], v[1], v[2]};
-        force.toHeliocentric(t, s);
-        return s;
+    /** The heliocentric state of the step's start (model coordinates x0, v0) at t, in a scratch array. */
+    private double[] heliocentricStart(double t) {
+        System.arraycopy(step.x0, 0, helioScratch, 0, 3);
+        System.arraycopy(step.v0, 0, helioScratch, 3, 3);
+        ForceModel.shift(step.shift, t, helioScratch, -1, sunScratch);
+        return helioScratch;
     }
 }

@@ -49,10 +49,7 @@ final class PlanetPositions {
         this.ephemeris = ephemeris;
         this.cursor = ephemeris instanceof ChebyshevCache c ? c.cursor() : null;
         Arrays.fill(times, Double.NaN);
-        double total = trailcross.ephemeris.Body.SUN.gm();
-        for (trailcross.ephemeris.Body b : trailcross.ephemeris.Body.MASSIVE_PLANETS) {
-            total += b.gm();
-        }
+        double total = trailcross.ephemeris.Body.systemGm();
         for (int j = 0; j < BODIES; j++) {
             weight[j] = ChebyshevCache.ALL[j].gm() / total;
         }

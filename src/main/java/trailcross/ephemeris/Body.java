@@ -41,6 +41,15 @@ public enum Body {
         MERCURY, VENUS, EARTH_MOON_BARYCENTRE, MARS, JUPITER, SATURN, URANUS, NEPTUNE
     };
 
+    /** @return GM of the Sun and the {@link #MASSIVE_PLANETS} together, au³/d²: the barycentre's weight */
+    public static double systemGm() {
+        double m = SUN.gm();
+        for (Body b : MASSIVE_PLANETS) {
+            m += b.gm();
+        }
+        return m;
+    }
+
     private final String key;
     private final double gm;
 

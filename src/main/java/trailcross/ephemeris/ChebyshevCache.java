@@ -111,10 +111,7 @@ public final class ChebyshevCache implements Ephemeris {
                 }
             }
         }
-        double m = Body.SUN.gm();
-        for (Body b : Body.MASSIVE_PLANETS) {
-            m += b.gm();
-        }
+        double m = Body.systemGm();
         for (int i = 0; i < PLANETS; i++) {
             massWeight[i] = ITEMS[i].gm() / m;
         }
@@ -242,13 +239,12 @@ public final class ChebyshevCache implements Ephemeris {
         int n = COEFFS[i];
         double length = LENGTH[i];
         double start = blockStart(i, index);
-        double a = start;
-        double b = start + length;
+        double end = start + length;
         double[][] values = new double[n][3];
-        double[] planet = new double[6];
+        double[] planet = new double[3];
         Cursor own = i == SUN_ITEM ? new Cursor() : null;
         for (int j = 0; j < n; j++) {
-            double t = j == 0 ? b : j == n - 1 ? a : a + 0.5 * length * (nodes[i][j] + 1);
+            double t = j == 0 ? end : j == n - 1 ? start : start + 0.5 * length * (nodes[i][j] + 1);
             if (i == MOON_ITEM) {
                 source.moonGeocentricPosition(t, values[j]);
             } else if (i == SUN_ITEM) {

@@ -96,7 +96,7 @@ public final class Vsop87Ephemeris implements Ephemeris {
     @Override
     public void sunBarycentric(double t, double[] out) {
         checkSpan(t);
-        double total = Body.SUN.gm();
+        double total = Body.systemGm();
         double[] sum = new double[6];
         double[] s = new double[6];
         for (Body b : Body.MASSIVE_PLANETS) {
@@ -104,7 +104,6 @@ public final class Vsop87Ephemeris implements Ephemeris {
             for (int k = 0; k < 6; k++) {
                 sum[k] += b.gm() * s[k];
             }
-            total += b.gm();
         }
         for (int k = 0; k < 6; k++) {
             out[k] = -sum[k] / total;
