@@ -34,7 +34,10 @@ final class ForecastCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "STREAM", description = "the stream file")
     Path stream;
 
-    @Option(names = "--year", required = true, paramLabel = "Y", description = "the forecast year")
+    @Option(names = "--year", required = true, paramLabel = "Y|A..B",
+            description = "the forecast year, or a span of years A..B (one table with a year column)")
+    String yearText;
+
     int year;
 
     @Option(names = "--since", paramLabel = "YEAR",
@@ -48,8 +51,17 @@ final class ForecastCommand implements Callable<Integer> {
     static final int DEFAULT_RETURNS = 4;
     static final int DEFAULT_SPAN_YEARS = 250;
 
-    @Option(names = "--particles", defaultValue = "1000", paramLabel = "N", description = "particles per return (default 1000)")
+    /** Default particles per return. */
+    static final int DEFAULT_PARTICLES = 6000;
+
+    @Option(names = "--particles", defaultValue = "" + DEFAULT_PARTICLES, paramLabel = "N",
+            description = "particles per return, over all sampling stages (default " + DEFAULT_PARTICLES + ")")
     int particles;
+
+    @Option(names = "--sampling", defaultValue = "targeted", paramLabel = "targeted|plain",
+            description = "targeted: a pilot cloud, then clouds concentrated where particles meet the Earth, "
+                    + "importance-weighted (default); plain: the ejection law alone")
+    String sampling;
 
     @Option(names = "--seed", defaultValue = "1", paramLabel = "S", description = "random seed (default 1)")
     long seed;
@@ -84,8 +96,34 @@ final class ForecastCommand implements Callable<Integer> {
         };
     }
 
+    /**
+     * @param text "Y" or "A..B"
+     * @return the first and last year
+     */
+    static int[] years(String text) {
+        String t = text.trim();
+        try {
+            int k = t.indexOf("..");
+            if (k < 0) {
+                int y = Integer.parseInt(t);
+                return new int[] {y, y};
+            }
+            return new int[] {Integer.parseInt(t.substring(0, k).trim()), Integer.parseInt(t.substring(k + 2).trim())};
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("--year: '" + text + "' is not a year or a span A..B");
+        }
+    }
+
     @Override
     public Integer call() {
+        int[] span = years(yearText);
+        year = span[0];
+        if (span[1] < span[0]) {
+            throw new IllegalArgumentException("--year " + yearText + ": the span is reversed");
+        }
+        if (!sampling.equals("targeted") && !sampling.equals("plain")) {
+            throw new IllegalArgumentException("--sampling: '" + sampling + "' is not targeted or plain");
+        }
         if (threads < 1) {
             throw new IllegalArgumentException("--threads must be >= 1, got " + threads);
         }
@@ -102,11 +140,13 @@ final class ForecastCommand implements Callable<Integer> {
         int max = since != null ? 0 : returns != null ? returns : DEFAULT_RETURNS;
         boolean screen = since == null && returns == null;
         String name = stream.getFileName().toString().replaceFirst("\\.toml$", "");
-        Path dir = out != null ? out : Path.of("out", name + "-" + year);
-        ForecastRun.Settings settings = new ForecastRun.Settings(year, from, max, screen, particles, seed, threads);
+        Path dir = out != null ? out : Path.of("out", name + "-" + (span[1] > span[0] ? span[0] + "-" + span[1] : "" + year));
+        ForecastRun.Settings settings = new ForecastRun.Settings(span[0], span[1], from, max, screen, particles, seed,
+                threads, sampling.equals("targeted"));
         String fingerprint;
         try {
-            fingerprint = "settings " + settings.year() + " " + settings.sinceYear() + " " + settings.maxReturns() + " "
+            fingerprint = "settings " + settings.firstYear() + ".." + settings.lastYear() + " " + settings.targeted()
+                    + " " + settings.sinceYear() + " " + settings.maxReturns() + " "
                     + settings.screen() + " " + settings.particles() + " " + settings.seed() + " ephemeris " + eph.name()
                     + "\n" + java.nio.file.Files.readString(stream);
         } catch (java.io.IOException e) {
@@ -120,20 +160,7 @@ final class ForecastCommand implements Callable<Integer> {
                 }, System.console() != null ? ForecastCommand::bar : trailcross.forecast.Progress.NONE, checkpoint);
         List<Path> files = ForecastWriter.write(dir, stream, r, eph, eph.name(), new Version().getVersion()[0]);
         o.println();
-        o.printf(Locale.ROOT, "%s in %d: %d trail(s) meet the Earth%n", d.name(), year, r.meetings().size());
-        o.printf(Locale.ROOT, "%-6s %4s %-20s %9s %10s %5s %7s %7s %6s %6s %6s %7s%n", "trail", "rev", "peak (UTC)",
-                "sol.long", "delta r", "n", "RA", "Dec", "Vg", "FWHM", "fM", "ZHR");
-        for (ForecastRun.Trail t : r.meetings()) {
-            TrailEncounter m = t.meeting();
-            o.printf(Locale.ROOT, "%-6d %4d %-20s %9.4f %+10.5f %5d %7.2f %+7.2f %6.2f %5.1fh %6.3f %7s%n",
-                    t.returnYear(), m.revolutions(), EpochFormat.utc(Epoch.ofDaysSinceJ2000(m.peakT()), 0).replace("T", " "),
-                    m.solarLongitudeDeg(), m.deltaR(), m.particles(), m.raDeg(), m.decDeg(), m.vgKmS(), m.fwhmHours(),
-                    m.fM(), Double.isNaN(m.zhr()) ? "-" : String.format(Locale.ROOT, "%.0f", m.zhr()));
-            o.printf(Locale.ROOT, "       peak time uncertainty (resampling) %.0f min%n", m.peakSigmaMin());
-        }
-        if (r.meetings().isEmpty()) {
-            o.println("No trail has enough particles near the Earth in " + year + " (try more --particles or an earlier --since).");
-        }
+        trailcross.report.ForecastTable.print(o, d.name(), r);
         o.println(ForecastWriter.CAUTION);
         o.printf(Locale.ROOT, "wrote %s (%.0f s)%n", String.join(", ", files.stream().map(Path::toString).toList()), r.seconds());
         return 0;

@@ -21,8 +21,33 @@ import trailcross.ephemeris.Ephemeris;
  * @param planets whether to include the planetary perturbations
  * @param relativity whether to include the 1PN solar term
  * @param barycentric whether to integrate in barycentric coordinates (only with the planets)
+ * @param only the bodies whose pull is included (null: all of them)
  */
-public record ForceModelFactory(Ephemeris ephemeris, boolean planets, boolean relativity, boolean barycentric) {
+public record ForceModelFactory(Ephemeris ephemeris, boolean planets, boolean relativity, boolean barycentric,
+        java.util.Set<Body> only) {
+
+    /**
+     * All the planets when asked for.
+     *
+     * @param ephemeris the planets
+     * @param planets whether to include the planetary perturbations
+     * @param relativity whether to include the 1PN solar term
+     * @param barycentric whether to integrate in barycentric coordinates (only with the planets)
+     */
+    public ForceModelFactory(Ephemeris ephemeris, boolean planets, boolean relativity, boolean barycentric) {
+        this(ephemeris, planets, relativity, barycentric, null);
+    }
+
+    /**
+     * A reduced model for tests and studies: the Sun and the bodies named only (heliocentric frame).
+     *
+     * @param ephemeris the planets
+     * @param bodies the bodies whose pull is included
+     * @return the factory
+     */
+    public static ForceModelFactory sunAnd(Ephemeris ephemeris, Body... bodies) {
+        return new ForceModelFactory(ephemeris, true, false, false, java.util.Set.of(bodies));
+    }
 
     /**
      * The default frame: barycentric with the planets, heliocentric without.
@@ -40,6 +65,9 @@ public record ForceModelFactory(Ephemeris ephemeris, boolean planets, boolean re
         if (barycentric && !planets) {
             throw new IllegalArgumentException("a barycentric force model needs the planets");
         }
+        if (only != null && barycentric) {
+            throw new IllegalArgumentException("a reduced set of planets is integrated heliocentrically");
+        }
     }
 
     /**
@@ -55,7 +83,7 @@ public record ForceModelFactory(Ephemeris ephemeris, boolean planets, boolean re
         terms.add(new SunGravity(gm, beta));
         PlanetPositions positions = planets ? new PlanetPositions(ephemeris) : null;
         if (planets) {
-            terms.add(new PlanetaryPerturbations(ephemeris, positions, !barycentric));
+            terms.add(new PlanetaryPerturbations(ephemeris, positions, !barycentric, only));
         }
         if (relativity) {
             terms.add(new SolarRelativity(gm));

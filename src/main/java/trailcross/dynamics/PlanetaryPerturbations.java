@@ -33,13 +33,14 @@ public final class PlanetaryPerturbations implements Acceleration {
      * @param ephemeris the planets' source
      * @param planets the positions' reader, shared with the force model
      * @param indirect whether to add the indirect terms (heliocentric integration)
+     * @param only the bodies included (null: all)
      */
-    PlanetaryPerturbations(Ephemeris ephemeris, PlanetPositions planets, boolean indirect) {
+    PlanetaryPerturbations(Ephemeris ephemeris, PlanetPositions planets, boolean indirect, java.util.Set<Body> only) {
         this.planets = planets;
         this.indirect = indirect;
         this.jump = ephemeris.discontinuityAu();
         for (int j = 0; j < bodies.length; j++) {
-            gm[j] = bodies[j].gm();
+            gm[j] = only == null || only.contains(bodies[j]) ? bodies[j].gm() : 0;
             double r = RADII_KM[j] / Body.Constants.AU_KM;
             radius2[j] = r * r;
         }

@@ -79,15 +79,57 @@ public final class ParticleGenerator {
      * @return the particles, ids 0 … n − 1
      */
     public List<Meteoroid> generate(int n, long seed, boolean quasiRandom, int threads) {
+        return generate(n, seed, quasiRandom, threads, PeriodFocus.PRIOR, 0);
+    }
+
+    /**
+     * A cloud drawn from a proposal: each particle's candidates come from the stream's own ejection law
+     * and are kept with the focus' acceptance of their period at ejection ({@link PeriodFocus}); with
+     * {@link PeriodFocus#PRIOR} this is the plain cloud, bit for bit. Weights are the physical ones; the
+     * importance weights come from {@link ImportanceWeights}.
+     *
+     * @param n number of particles (≥ 1)
+     * @param seed the seed
+     * @param quasiRandom draw the first candidate of each particle from the Sobol sequence
+     * @param threads worker threads (the result does not depend on it)
+     * @param focus the proposal
+     * @param firstId the first particle's id (ids firstId … firstId + n − 1; size bins by position)
+     * @return the particles
+     */
+    public List<Meteoroid> generate(int n, long seed, boolean quasiRandom, int threads, PeriodFocus focus, long firstId) {
+        return generate(n, seed, quasiRandom, threads, focus, firstId, null);
+    }
+
+    /**
+     * As {@link #generate(int, long, boolean, int, PeriodFocus, long)}, with the particles shared among the size
+     * bins in given proportions (stratified sampling with any allocation stays unbiased: a particle of bin k
+     * stands for N f_k / n_k meteoroids; Cochran 1977, ch. 5). Bin k takes a contiguous run of positions, its
+     * count the largest-remainder rounding of n × share_k.
+     *
+     * @param n number of particles (≥ 1)
+     * @param seed the seed
+     * @param quasiRandom draw the first candidate of each particle from the Sobol sequence
+     * @param threads worker threads (the result does not depend on it)
+     * @param focus the proposal
+     * @param firstId the first particle's id
+     * @param allocation each bin's share of the particles (null: equal, particle i in bin i mod K)
+     * @return the particles
+     */
+    public List<Meteoroid> generate(int n, long seed, boolean quasiRandom, int threads, PeriodFocus focus, long firstId,
+            double[] allocation) {
+        if (allocation != null && (!stratified || allocation.length != sizes.bins())) {
+            throw new IllegalArgumentException("an allocation needs stratified sizes and one share per bin");
+        }
         if (n < 1) {
             throw new IllegalArgumentException("--particles must be >= 1, got " + n);
         }
         Meteoroid[] out = new Meteoroid[n];
         int blocks = (n + BLOCK - 1) / BLOCK;
-        Runnable job = () -> IntStream.range(0, blocks).parallel().forEach(b -> block(b, n, seed, quasiRandom, out));
+        Runnable job = () -> IntStream.range(0, blocks).parallel()
+                .forEach(b -> block(b, n, seed, quasiRandom, focus, firstId, allocation, out));
         if (threads <= 1) {
             for (int b = 0; b < blocks; b++) {
-                block(b, n, seed, quasiRandom, out);
+                block(b, n, seed, quasiRandom, focus, firstId, allocation, out);
             }
         } else {
             ForkJoinPool pool = new ForkJoinPool(threads);
@@ -100,7 +142,133 @@ public final class ParticleGenerator {
         return Arrays.asList(out);
     }
 
-    private void block(int b, int n, long seed, boolean quasiRandom, Meteoroid[] out) {
+    /**
+     * The normalising constant of a proposal per size bin, Z_k = E_p[a(P0)] over the stream's own ejection
+     * law in bin k, from {@code draws} candidates per bin (cheap: no integration). Its relative statistical
+     * error is about √((1 − Z)/(draws · Z)) for a 0/1-like acceptance.
+     *
+     * @param focus the proposal
+     * @param draws candidates per bin
+     * @param seed the seed
+     * @return Z per bin (all 1 for the prior)
+     */
+    public double[] meanAcceptance(PeriodFocus focus, int draws, long seed) {
+        double[] z = new double[sizes.bins()];
+        if (focus.isPrior()) {
+            Arrays.fill(z, 1.0);
+            return z;
+        }
+        IntStream.range(0, z.length).parallel().forEach(k -> {
+            RandomGenerator rng = new Well19937c(new int[] {(int) seed, (int) (seed >>> 32), -1 - k});
+            double[] u = new double[4];
+            double[] s = new double[6];
+            double[] dir = new double[3];
+            double sum = 0;
+            for (int j = 0; j < draws; j++) {
+                fill(rng, u);
+                Meteoroid m = draw(j, k, Double.NaN, u, rng, PeriodFocus.PRIOR, s, dir);
+                sum += focus.acceptance(periodAtEjection(m.state(), m.beta()));
+            }
+            z[k] = sum / draws;
+        });
+        return z;
+    }
+
+    /**
+     * The orbital period at ejection under the Sun's gravity reduced by radiation pressure, from the
+     * vis-viva energy: a = 1/(2/r − v²/μ), P = 2π √(a³/μ), μ = GM☉(1 − β). One function for the proposal and
+     * for the crossings' record, so that both see the same number.
+     *
+     * @param state heliocentric state (au, au/d)
+     * @param beta radiation-pressure β
+     * @return the period, days (infinite when unbound)
+     */
+    public static double periodAtEjection(double[] state, double beta) {
+        double mu = Body.SUN.gm() * (1 - beta);
+        double r = Math.sqrt(state[0] * state[0] + state[1] * state[1] + state[2] * state[2]);
+        double v2 = state[3] * state[3] + state[4] * state[4] + state[5] * state[5];
+        double inv = 2 / r - v2 / mu;
+        if (!(inv > 0)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double a = 1 / inv;
+        return 2 * Math.PI * Math.sqrt(a * a * a / mu);
+    }
+
+    /**
+     * @param index a particle's position in its cloud (id − first id)
+     * @param n the cloud's size
+     * @param allocation the bins' shares (null: equal, interleaved)
+     * @return its size bin
+     */
+    public int binOf(long index, int n, double[] allocation) {
+        if (!stratified) {
+            return 0;
+        }
+        if (allocation == null) {
+            return (int) (index % sizes.bins());
+        }
+        int[] c = counts(n, allocation);
+        long acc = 0;
+        for (int k = 0; k < c.length; k++) {
+            acc += c[k];
+            if (index < acc) {
+                return k;
+            }
+        }
+        throw new IllegalArgumentException("position " + index + " beyond the cloud of " + n);
+    }
+
+    /**
+     * @param bin a size bin
+     * @param n the cloud's size
+     * @param allocation the bins' shares (null: equal)
+     * @return how many of the cloud's particles are in that bin
+     */
+    public int inBin(int bin, int n, double[] allocation) {
+        int bins = sizes.bins();
+        if (!stratified) {
+            return n;
+        }
+        return allocation == null ? n / bins + (bin < n % bins ? 1 : 0) : counts(n, allocation)[bin];
+    }
+
+    /** Largest-remainder rounding of n × share (ties to the lower bin). */
+    static int[] counts(int n, double[] share) {
+        double total = 0;
+        for (double x : share) {
+            total += x;
+        }
+        int[] c = new int[share.length];
+        double[] rest = new double[share.length];
+        int used = 0;
+        for (int k = 0; k < share.length; k++) {
+            double x = n * share[k] / total;
+            c[k] = (int) Math.floor(x);
+            rest[k] = x - c[k];
+            used += c[k];
+        }
+        while (used < n) {
+            int best = 0;
+            for (int k = 1; k < share.length; k++) {
+                if (rest[k] > rest[best]) {
+                    best = k;
+                }
+            }
+            c[best]++;
+            rest[best] = -1;
+            used++;
+        }
+        return c;
+    }
+
+    /** @return whether sizes are stratified in bins */
+    public boolean stratified() {
+        return stratified;
+    }
+
+    private void block(int b, int n, long seed, boolean quasiRandom, PeriodFocus focus, long firstId,
+            double[] allocation, Meteoroid[] out) {
         RandomGenerator rng = new Well19937c(new int[] {(int) seed, (int) (seed >>> 32), b});
         SobolSequenceGenerator sobol = null;
         int from = b * BLOCK;
@@ -109,7 +277,6 @@ public final class ParticleGenerator {
             sobol = new SobolSequenceGenerator(4);
             sobol.skipTo(from + 1);
         }
-        int bins = sizes.bins();
         double realMeteoroids = production.massKg() / sizes.meanMass();
         double[] u = new double[4];
         double[] s = new double[6];
@@ -120,38 +287,48 @@ public final class ParticleGenerator {
             } else {
                 fill(rng, u);
             }
-            int bin = stratified ? i % bins : 0;
-            int inBin = stratified ? n / bins + (bin < n % bins ? 1 : 0) : n;
-            double weight = realMeteoroids * sizes.numberFraction(bin) / inBin;
-            for (int attempt = 0;; attempt++) {
-                double t = production.sample(u[0]);
-                history.stateAt(t, s);
-                double mass = stratified ? sizes.massInBin(bin, u[1]) : sizes.mass(u[1]);
-                double radius = sizes.radius(mass);
-                double r = Math.sqrt(s[0] * s[0] + s[1] * s[1] + s[2] * s[2]);
-                double v = model.speedMs(r, radius);
-                if (escape != null) {
-                    v = escape.speedAtInfinity(v);
-                }
-                if (v >= 0) {
-                    v *= speedScale;
-                    directions.direction(u[2], u[3], s, dir);
-                    double dv = v * M_S_TO_AU_D;
-                    s[3] += dv * dir[0];
-                    s[4] += dv * dir[1];
-                    s[5] += dv * dir[2];
-                    out[i] = new Meteoroid(i, arc.perihelion(), t, s.clone(), radius, mass,
-                            RadiationPressure.beta(qpr, density, radius), weight, v);
-                    break;
-                }
-                if (attempt == MAX_REDRAWS) {
-                    throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                            "the ejection model lifts no meteoroid of the stream's sizes off the nucleus "
-                                    + "(escape speed %.2f m/s); reduce particles.radius_max_m or parent.radius_km",
-                            escape.speedMs()));
-                }
-                fill(rng, u);
+            int bin = binOf(i, n, allocation);
+            double weight = realMeteoroids * sizes.numberFraction(bin) / inBin(bin, n, allocation);
+            out[i] = draw(firstId + i, bin, weight, u, rng, focus, s, dir);
+        }
+    }
+
+    /** One particle: candidates from u (then from rng) until the nucleus lets it go and the focus keeps it. */
+    private Meteoroid draw(long id, int bin, double weight, double[] u, RandomGenerator rng, PeriodFocus focus,
+            double[] s, double[] dir) {
+        int stuck = 0;
+        for (long attempt = 0;; attempt++) {
+            double t = production.sample(u[0]);
+            history.stateAt(t, s);
+            double mass = stratified ? sizes.massInBin(bin, u[1]) : sizes.mass(u[1]);
+            double radius = sizes.radius(mass);
+            double r = Math.sqrt(s[0] * s[0] + s[1] * s[1] + s[2] * s[2]);
+            double v = model.speedMs(r, radius);
+            if (escape != null) {
+                v = escape.speedAtInfinity(v);
             }
+            if (v >= 0) {
+                v *= speedScale;
+                directions.direction(u[2], u[3], s, dir);
+                double dv = v * M_S_TO_AU_D;
+                s[3] += dv * dir[0];
+                s[4] += dv * dir[1];
+                s[5] += dv * dir[2];
+                double beta = RadiationPressure.beta(qpr, density, radius);
+                // The prior keeps every candidate without a draw, so that its cloud is the plain one bit for bit.
+                if (focus.isPrior() || rng.nextDouble() < focus.acceptance(periodAtEjection(s, beta))) {
+                    return new Meteoroid(id, arc.perihelion(), t, s.clone(), radius, mass, beta, weight, v);
+                }
+            } else if (++stuck == MAX_REDRAWS) {
+                throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
+                        "the ejection model lifts no meteoroid of the stream's sizes off the nucleus "
+                                + "(escape speed %.2f m/s); reduce particles.radius_max_m or parent.radius_km",
+                        escape.speedMs()));
+            }
+            if (attempt > 100_000_000L) {
+                throw new IllegalStateException("targeted ejection: no candidate kept in 1e8 draws");
+            }
+            fill(rng, u);
         }
     }
 

@@ -130,4 +130,22 @@ public final class SizeDistribution {
     public double massIndex() {
         return massIndex;
     }
+
+    /**
+     * @param bin a bin
+     * @param massKg a mass
+     * @return the fraction of the meteoroids (by number, of the whole law) in that bin heavier than the mass
+     */
+    public double numberFractionAbove(int bin, double massKg) {
+        double a = edges[bin];
+        double b = edges[bin + 1];
+        if (massKg <= a) {
+            return numberFraction[bin];
+        }
+        if (massKg >= b || b == a) {
+            return 0;
+        }
+        double e = 1 - massIndex;
+        return numberFraction[bin] * (Math.pow(b, e) - Math.pow(massKg, e)) / (Math.pow(b, e) - Math.pow(a, e));
+    }
 }

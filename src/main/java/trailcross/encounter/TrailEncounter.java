@@ -1,35 +1,35 @@
 package trailcross.encounter;
 
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
-import org.apache.commons.math3.random.Well19937c;
-import org.apache.commons.math3.stat.descriptive.DescriptiveStatistics;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
 import trailcross.ephemeris.Body;
 import trailcross.ephemeris.Ephemeris;
 import trailcross.frames.Angles;
 
 /**
- * One trail's meeting with the Earth in one year, from its particles' node crossings ({@link Encounter}):
+ * One trail's meeting with the Earth in one year, from its particles' node crossings ({@link Encounter}),
+ * each weighted by the real meteoroids it stands for (importance weights included):
  * <ul>
  * <li>the trail section met: crossings whose node passage lies within {@value #ALONG_TRAIL_DAYS} days of the
  * Earth's passage of the same longitude, the window doubled (to at most {@value #MAX_ALONG_TRAIL_DAYS} days)
  * until it holds {@value #ENOUGH} crossings;</li>
- * <li>delta r: the median of their delta r;</li>
- * <li>peak: the median of their crossing longitudes (robust against the broad component of small, fast
- * meteoroids), the activity profile's width from their median absolute deviation (FWHM = 2.355 × 1.4826
- * MAD, Gaussian), the peak's uncertainty the spread of the median over 200 bootstrap resamples;</li>
- * <li>the radiant and Vg: the mean over the crossings nearest the Earth's path (up to 20);</li>
- * <li>fM (McNaught &amp; Asher 1999): the along-trail density against an unperturbed trail one revolution
- * old, 1/|d t_node / d P0|, with t_node the node passage times and P0 the orbital periods at ejection
- * (least-squares slope; an unperturbed trail N revolutions old has d t_node / d P0 = N);</li>
- * <li>ZHR: the meteoroids brighter than +6.5 mag (mass from Jacchia, Verniani &amp; Briggs 1967,
- * M = 55.34 − 8.75 log V − 2.25 log m, V cm/s, m g, zenith; from memory) crossing the plane within
- * ±{@value #BOX_DELTA_R_AU} au of the Earth's path and ±{@value #BOX_LONGITUDE_DEG}° of the peak, per area
- * and time, turned into the flux perpendicular to their geocentric velocity (× Vg/|v_z|), then ZHR =
- * Q · 37200 / ((13.1 r − 16.45)(r − 1.3)^0.748) with the population index r (Koschack &amp; Rendtel 1990,
- * WGN 18, 44; from memory). Empty when the weights are unknown.</li>
+ * <li>the activity profile: the flux of meteoroids brighter than +6.5 mag at the Earth along its path, from the
+ * weighted kernel density of the section's crossings in delta r (at δr = 0) and solar longitude
+ * ({@link DensityProfile}); each crossing's rate through the plane becomes a flux perpendicular to its
+ * geocentric velocity (× Vg/|v_z|) and the flux becomes ZHR = Q · 37200 / ((13.1 r − 16.45)(r − 1.3)^0.748)
+ * with the population index r (Koschack &amp; Rendtel 1990, WGN 18, 44; from memory); the mass of a +6.5-mag
+ * meteor from Jacchia, Verniani &amp; Briggs (1967), M = 55.34 − 8.75 log V − 2.25 log m (V cm/s, m g, zenith;
+ * from memory);</li>
+ * <li>peak: the profile's maximum, its uncertainty from resampling; FWHM from the profile; ZHR at the peak
+ * with its resampling uncertainty (relative to the run's strongest meeting when the stream gives no dust
+ * production);</li>
+ * <li>delta r: the weighted median of the crossings at the peak longitude (weights × the longitude kernel);
+ * the radiant and Vg: their weighted mean;</li>
+ * <li>fM (McNaught &amp; Asher 1999): 1/|d t_node / d P0|, with t_node the node passage times and P0 the
+ * orbital periods at ejection (least-squares slope; an unperturbed trail N revolutions old has
+ * d t_node / d P0 = N);</li>
+ * <li>ESS: Kish's effective number of the crossings behind the profile.</li>
  * </ul>
  *
  * @param returnT the trail's return (perihelion), TDB days since J2000
@@ -44,11 +44,14 @@ import trailcross.frames.Angles;
  * @param vgKmS Vg, km/s
  * @param fwhmHours FWHM of the activity profile, hours
  * @param fM the along-trail density factor
- * @param zhr the ZHR estimate (NaN when unknown)
+ * @param zhr the ZHR at the peak (for the weights given)
+ * @param zhrSigma its 1-σ resampling uncertainty
+ * @param ess Kish's effective sample size of the crossings behind the profile
+ * @param profile the activity profile in ZHR against solar longitude
  */
 public record TrailEncounter(double returnT, int revolutions, double peakT, double peakSigmaMin,
         double solarLongitudeDeg, double deltaR, int particles, double raDeg, double decDeg, double vgKmS,
-        double fwhmHours, double fM, double zhr) {
+        double fwhmHours, double fM, double zhr, double zhrSigma, double ess, DensityProfile.Result profile) {
 
     /** Along-trail half-window: crossings this many days before or after the Earth, days. */
     public static final double ALONG_TRAIL_DAYS = 10.0;
@@ -56,17 +59,13 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
     public static final int ENOUGH = 12;
     /** ... but not beyond this half-width, days. */
     public static final double MAX_ALONG_TRAIL_DAYS = 80.0;
-    /** ZHR box: half-width in delta r, au. */
-    public static final double BOX_DELTA_R_AU = 0.001;
-    /** ZHR box: half-width in solar longitude, degrees. */
-    public static final double BOX_LONGITUDE_DEG = 0.05;
     /** Hours per degree of solar longitude (365.2422 d per 360°). */
     public static final double HOURS_PER_DEGREE = 365.2422 * 24 / 360;
     private static final double AU_KM = Body.Constants.AU_KM;
 
     /**
-     * @param encounters the crossings of one trail in the year (at least three)
-     * @param parentPeriodDays the parent's orbital period (for revolutions and fM)
+     * @param encounters the crossings of one trail in the year
+     * @param parentPeriodDays the parent's orbital period (for revolutions)
      * @param populationIndex r of the shower
      * @param ephemeris the planets (the Earth's time at the peak longitude)
      * @return the trail's meeting, or null when fewer than three crossings lie within the along-trail window
@@ -90,49 +89,77 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
         if (met.size() < 3) {
             return null;
         }
+        int n = met.size();
         double returnT = met.get(0).crossing().returnT();
-        double[] dr = met.stream().mapToDouble(Encounter::deltaR).toArray();
-        double deltaR = median(dr, null);
+        double[] dr = new double[n];
+        double[] lon = new double[n];
+        double[] w = new double[n];
+        double[] zhrValue = new double[n];
+        double r = populationIndex;
+        double toZhr = 37200 / ((13.1 * r - 16.45) * Math.pow(r - 1.3, 0.748));
+        double rE = 0;
+        for (Encounter e : met) {
+            rE += (e.crossing().r() - e.deltaR()) / n;
+        }
+        // Profile units: Σ value K_r K_λ is per au of delta r and per degree of longitude; divided by the area
+        // element (km² per au·degree at the Earth's distance) and the section's duration (hours) it is a rate
+        // per km² per hour.
+        double perAreaTime = 1 / (AU_KM * AU_KM * rE * Math.toRadians(1) * 2 * window * 24);
         // Longitudes unwrapped around the first one, so that a trail met at λ ≈ 0° stays continuous.
         double lon0 = met.get(0).solarLongitudeDeg();
-        double[] lon = met.stream().mapToDouble(e -> lon0 + Math.toDegrees(Angles.difference(
-                Math.toRadians(e.solarLongitudeDeg()), Math.toRadians(lon0)))).toArray();
-        // The peak: the median longitude of the section, robust to the broad component of small, fast
-        // meteoroids; its uncertainty from resampling; the width from the median absolute deviation.
-        double peakLon = median(lon, null);
-        double[] absDev = new double[lon.length];
-        for (int k = 0; k < lon.length; k++) {
-            absDev[k] = Math.abs(lon[k] - peakLon);
+        for (int i = 0; i < n; i++) {
+            Encounter e = met.get(i);
+            dr[i] = e.deltaR();
+            lon[i] = lon0 + Math.toDegrees(Angles.difference(Math.toRadians(e.solarLongitudeDeg()), Math.toRadians(lon0)));
+            double wi = e.crossing().weight();
+            w[i] = Double.isNaN(wi) ? 1 : wi;
+            double vg = e.radiant().vgKmS();
+            double vz = Math.abs(e.crossing().state()[5]) * AU_KM / 86400.0;
+            boolean visible = e.crossing().massKg() >= massLimitKg(vg);
+            zhrValue[i] = visible ? w[i] * Math.min(vg / Math.max(vz, 1e-9), 1e3) * perAreaTime * toZhr : 0;
         }
-        double sigmaLon = 1.4826 * median(absDev, null);
-        DescriptiveStatistics boot = new DescriptiveStatistics();
-        Well19937c rng = new Well19937c(Double.doubleToLongBits(returnT));
-        int[] pick = new int[lon.length];
-        for (int b = 0; b < 200; b++) {
-            for (int k = 0; k < pick.length; k++) {
-                pick[k] = rng.nextInt(pick.length);
+        DensityProfile.Result prof = DensityProfile.of(dr, lon, w, zhrValue, Double.doubleToLongBits(returnT));
+        if (prof == null) {
+            // No meteoroid above the visual limit near the Earth's path: profile of all sizes for the timing.
+            double[] all = new double[n];
+            for (int i = 0; i < n; i++) {
+                all[i] = w[i] * perAreaTime;
             }
-            boot.addValue(median(lon, pick));
+            prof = DensityProfile.of(dr, lon, w, all, Double.doubleToLongBits(returnT));
+            if (prof == null) {
+                return null;
+            }
+            prof = new DensityProfile.Result(prof.grid(), new double[prof.grid().length], new double[prof.grid().length],
+                    new double[prof.grid().length], prof.peak(), 0, prof.peakSigma(), 0, prof.hR(), prof.hLambda(),
+                    prof.fwhm(), prof.ess());
         }
-        double peakSigmaMin = boot.getStandardDeviation() * HOURS_PER_DEGREE * 60;
+        double peakLon = prof.peak();
         double peakT = EarthLongitude.time(ephemeris, Math.toRadians(peakLon + 180), met.get(0).earthT());
-        // Radiant: the crossings nearest the Earth's path.
-        List<Encounter> nearest = new ArrayList<>(met);
-        nearest.sort(Comparator.comparingDouble(e -> Math.abs(e.deltaR())));
-        nearest = nearest.subList(0, Math.min(20, nearest.size()));
+        // The crossings at the peak: weights times the longitude kernel.
+        double[] atPeak = new double[n];
+        for (int i = 0; i < n; i++) {
+            double z = (lon[i] - peakLon) / prof.hLambda();
+            atPeak[i] = w[i] * Math.exp(-0.5 * z * z);
+        }
+        double deltaR = weightedMedian(dr, atPeak);
         double sx = 0;
         double sy = 0;
         double sz = 0;
         double vg = 0;
-        for (Encounter e : nearest) {
+        double sw = 0;
+        for (int i = 0; i < n; i++) {
+            Encounter e = met.get(i);
+            double zr = dr[i] / prof.hR();
+            double k = atPeak[i] * Math.exp(-0.5 * zr * zr);
             double ra = Math.toRadians(e.radiant().raDeg());
             double dec = Math.toRadians(e.radiant().decDeg());
-            sx += Math.cos(dec) * Math.cos(ra);
-            sy += Math.cos(dec) * Math.sin(ra);
-            sz += Math.sin(dec);
-            vg += e.radiant().vgKmS();
+            sx += k * Math.cos(dec) * Math.cos(ra);
+            sy += k * Math.cos(dec) * Math.sin(ra);
+            sz += k * Math.sin(dec);
+            vg += k * e.radiant().vgKmS();
+            sw += k;
         }
-        vg /= nearest.size();
+        vg /= sw;
         double raDeg = Angles.normaliseDeg(Math.toDegrees(Math.atan2(sy, sx)));
         double decDeg = Math.toDegrees(Math.atan2(sz, Math.hypot(sx, sy)));
         // fM: node passage time against the period at ejection; an unperturbed trail N revolutions old has
@@ -145,53 +172,51 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
         }
         double fM = 1 / Math.abs(tp.getSlope());
         int revolutions = (int) Math.round((peakT - returnT) / parentPeriodDays);
-        double zhr = zhr(met, peakLon, vg, populationIndex, window);
-        return new TrailEncounter(returnT, revolutions, peakT, peakSigmaMin, Angles.normaliseDeg(peakLon), deltaR,
-                met.size(), raDeg, decDeg, vg, 2.3548 * sigmaLon * HOURS_PER_DEGREE, fM, zhr);
+        return new TrailEncounter(returnT, revolutions, peakT, prof.peakSigma() * HOURS_PER_DEGREE * 60,
+                Angles.normaliseDeg(peakLon), deltaR, n, raDeg, decDeg, vg, prof.fwhm() * HOURS_PER_DEGREE, fM,
+                prof.peakValue(), prof.peakValueSigma(), prof.ess(), prof);
     }
 
-    /** The median of v, or of a resample of it (indices in pick). */
-    private static double median(double[] v, int[] pick) {
-        double[] x = new double[pick == null ? v.length : pick.length];
-        for (int k = 0; k < x.length; k++) {
-            x[k] = v[pick == null ? k : pick[k]];
-        }
-        java.util.Arrays.sort(x);
-        int n = x.length;
-        return n % 2 == 1 ? x[n / 2] : 0.5 * (x[n / 2 - 1] + x[n / 2]);
-    }
-
-    /** The meteoroids brighter than +6.5 mag per km² per hour through the Earth, to ZHR. */
-    private static double zhr(List<Encounter> met, double peakLon, double vg, double r, double window) {
-        double vInf = Velocities.vInfinity(vg);
+    /**
+     * @param vgKmS geocentric speed, km/s
+     * @return the mass of a meteoroid of +6.5 mag at the zenith at that speed (Jacchia, Verniani &amp; Briggs
+     *     1967, from memory), kg
+     */
+    public static double massLimitKg(double vgKmS) {
+        double vInf = Velocities.vInfinity(vgKmS);
         double logM = (55.34 - 8.75 * Math.log10(vInf * 1e5) - 6.5) / 2.25;
-        double massLimitKg = Math.pow(10, logM) * 1e-3;
-        double weight = 0;
-        double vzSum = 0;
-        int n = 0;
-        for (Encounter e : met) {
-            double w = e.crossing().weight();
-            if (Double.isNaN(w)) {
-                return Double.NaN;
-            }
-            double dl = Math.toDegrees(Angles.difference(Math.toRadians(e.solarLongitudeDeg()), Math.toRadians(peakLon)));
-            if (Math.abs(e.deltaR()) <= BOX_DELTA_R_AU && Math.abs(dl) <= BOX_LONGITUDE_DEG) {
-                if (e.crossing().massKg() >= massLimitKg) {
-                    weight += w;
-                }
-                vzSum += Math.abs(e.crossing().state()[5]);
-                n++;
+        return Math.pow(10, logM) * 1e-3;
+    }
+
+    /** @return the profile's time of each grid point, TDB days since J2000 (linear in longitude about the peak) */
+    public double[] profileTimes() {
+        double[] g = profile.grid();
+        double[] t = new double[g.length];
+        double peakLon = profile.peak();
+        for (int j = 0; j < g.length; j++) {
+            t[j] = peakT + (g[j] - peakLon) * HOURS_PER_DEGREE / 24;
+        }
+        return t;
+    }
+
+    private static double weightedMedian(double[] x, double[] w) {
+        Integer[] order = new Integer[x.length];
+        double total = 0;
+        for (int i = 0; i < x.length; i++) {
+            order[i] = i;
+            total += w[i];
+        }
+        java.util.Arrays.sort(order, (a, b) -> Double.compare(x[a], x[b]));
+        if (!(total > 0)) {
+            return x[order[x.length / 2]];
+        }
+        double acc = 0;
+        for (int i : order) {
+            acc += w[i];
+            if (acc >= 0.5 * total) {
+                return x[i];
             }
         }
-        if (n == 0) {
-            return 0.0;
-        }
-        double vz = vzSum / n * AU_KM / 86400.0;
-        double rE = 1.0;
-        double areaKm2 = 2 * BOX_DELTA_R_AU * AU_KM * rE * AU_KM * Math.toRadians(2 * BOX_LONGITUDE_DEG);
-        double hours = 2 * window * 24;
-        double plane = weight / (areaKm2 * hours);
-        double flux = plane * vg / vz;
-        return flux * 37200 / ((13.1 * r - 16.45) * Math.pow(r - 1.3, 0.748));
+        return x[order[x.length - 1]];
     }
 }

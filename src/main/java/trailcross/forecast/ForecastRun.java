@@ -6,35 +6,103 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.Consumer;
 import trailcross.dynamics.Perihelion;
+import trailcross.ejection.ImportanceWeights;
 import trailcross.ejection.Meteoroid;
+import trailcross.ejection.ParticleGenerator;
+import trailcross.ejection.PeriodFocus;
+import trailcross.encounter.AxisMeeting;
 import trailcross.encounter.Encounter;
 import trailcross.encounter.NodeCrossing;
 import trailcross.encounter.TrailEncounter;
 import trailcross.ephemeris.Ephemeris;
+import trailcross.stream.ParentBody;
 import trailcross.stream.StreamDefinition;
 
 /**
- * The whole job for one year: the parent's returns in the chosen span, for each the meteoroid cloud
- * ({@link ReturnCloud}), its propagation to the year with node crossings ({@link TrailPropagation}), the
- * crossings' encounter quantities ({@link Encounter}) and the trail's meeting with the Earth
- * ({@link TrailEncounter}). By default the returns are screened by a quick test — the orbit at the return
- * passes within {@value #SCREEN_MOID_AU} au of the Earth's — and the most recent few kept. Each return's cloud is seeded from (seed, return year), so that a trail's
- * particles do not depend on which other returns are run.
+ * The whole job for one year or a span of years: the parent's returns in the chosen span, for each the
+ * meteoroid cloud ({@link ReturnCloud}) drawn in stages by targeted ejection ({@link TargetedEjection}), its
+ * propagation to the span's end with node crossings ({@link TrailPropagation}), the trail's axis
+ * ({@link TrailAxis}), and per year the cloud's meeting with the Earth ({@link TrailEncounter}) and the
+ * axis' ({@link AxisMeeting}). By default the returns are screened by a quick test — the orbit at the return
+ * passes within {@value #SCREEN_MOID_AU} au of the Earth's — and the most recent few kept. Each return's
+ * cloud is seeded from (seed, return year), so that a trail's particles do not depend on which other returns
+ * are run. A stream without a dust production is run with {@value #REFERENCE_DUST_KG_S} kg/s, so that
+ * intensities can be compared among its trails; no ZHR is shown for it.
  */
 public final class ForecastRun {
 
     /**
      * The run's settings.
      *
-     * @param year the forecast year
+     * @param firstYear the first forecast year
+     * @param lastYear the last (the same for one year)
      * @param sinceYear the first return year examined
      * @param maxReturns at most this many returns, the most recent (0: all in the span)
      * @param screen keep only returns whose orbit passes within {@link #SCREEN_MOID_AU} of the Earth's
      * @param particles particles per return
      * @param seed the seed
      * @param threads worker threads
+     * @param targeted draw the cloud by targeted ejection (false: plain sampling of the ejection law)
      */
-    public record Settings(int year, int sinceYear, int maxReturns, boolean screen, int particles, long seed, int threads) {
+    public record Settings(int firstYear, int lastYear, int sinceYear, int maxReturns, boolean screen, int particles,
+            long seed, int threads, boolean targeted) {
+
+        /**
+         * One year, targeted.
+         *
+         * @param year the forecast year
+         * @param sinceYear the first return year examined
+         * @param maxReturns at most this many returns (0: all)
+         * @param screen whether to screen the returns
+         * @param particles particles per return
+         * @param seed the seed
+         * @param threads worker threads
+         */
+        public Settings(int year, int sinceYear, int maxReturns, boolean screen, int particles, long seed, int threads) {
+            this(year, year, sinceYear, maxReturns, screen, particles, seed, threads, true);
+        }
+
+        /** @return the first forecast year */
+        public int year() {
+            return firstYear;
+        }
+
+        /** @return whether the run spans more than one year */
+        public boolean span() {
+            return lastYear > firstYear;
+        }
+    }
+
+    /**
+     * One trail's meeting with the Earth in one year.
+     *
+     * @param year the year
+     * @param returnYear the trail's return year
+     * @param revolutions the parent's revolutions since the return
+     * @param cloud the cloud's figures, or null when too few particles were near
+     * @param axis the axis' meeting nearest the Earth's path, or null when the axis does not meet the Earth
+     *     that year
+     * @param relativeIntensity the cloud's ZHR relative to the run's strongest meeting
+     */
+    public record Meeting(int year, int returnYear, int revolutions, TrailEncounter cloud, AxisMeeting.Root axis,
+            double relativeIntensity) {
+
+        /** @return the peak time shown: the cloud's, else the axis' */
+        public double peakT() {
+            return cloud != null ? cloud.peakT() : axis.peakT();
+        }
+
+        /**
+         * @return whether the cloud's and the axis' peak times differ by more than twice their combined
+         *     uncertainty
+         */
+        public boolean timesDisagree() {
+            if (cloud == null || axis == null) {
+                return false;
+            }
+            double sigma = Math.hypot(cloud.peakSigmaMin(), axis.sigmaMin());
+            return Math.abs(cloud.peakT() - axis.peakT()) * 1440 > 2 * sigma;
+        }
     }
 
     /**
@@ -43,11 +111,17 @@ public final class ForecastRun {
      * @param perihelion the return
      * @param returnYear its calendar year
      * @param particles the particles ejected
-     * @param encounters every crossing's encounter quantities in the year
-     * @param meeting the trail's meeting with the Earth, or null when too few particles were near
+     * @param encounters every crossing's encounter quantities in the span
+     * @param axisCrossings the axis family's crossings
+     * @param meetings its meetings, by year
      */
     public record Trail(Perihelion perihelion, int returnYear, int particles, List<Encounter> encounters,
-            TrailEncounter meeting) {
+            List<NodeCrossing> axisCrossings, List<Meeting> meetings) {
+
+        /** @return the first year's cloud meeting, or null */
+        public TrailEncounter meeting() {
+            return meetings.stream().filter(m -> m.cloud() != null).map(Meeting::cloud).findFirst().orElse(null);
+        }
     }
 
     /**
@@ -56,19 +130,29 @@ public final class ForecastRun {
      * @param settings the settings
      * @param trails one per return, in time order
      * @param seconds wall-clock seconds
+     * @param absolute whether ZHRs are absolute (the stream gives a dust production)
      */
-    public record Result(Settings settings, List<Trail> trails, double seconds) {
+    public record Result(Settings settings, List<Trail> trails, double seconds, boolean absolute) {
 
-        /** @return the trails that meet the Earth, strongest (ZHR, else smallest |delta r|) first */
-        public List<Trail> meetings() {
-            return trails.stream().filter(t -> t.meeting() != null).sorted(Comparator
-                    .comparingDouble((Trail t) -> Double.isNaN(t.meeting().zhr()) ? 0 : -t.meeting().zhr())
-                    .thenComparingDouble(t -> Math.abs(t.meeting().deltaR()))).toList();
+        /** @return every meeting, by year, then strongest (ZHR, else smallest |delta r|) first */
+        public List<Meeting> meetings() {
+            List<Meeting> all = new ArrayList<>();
+            for (Trail t : trails) {
+                all.addAll(t.meetings());
+            }
+            all.sort(Comparator.comparingInt(Meeting::year)
+                    .thenComparingDouble((Meeting m) -> m.cloud() == null ? 0 : -m.cloud().zhr())
+                    .thenComparingDouble(m -> Math.abs(m.cloud() != null ? m.cloud().deltaR() : m.axis().deltaR())));
+            return all;
         }
     }
 
     /** The quick test: a return's trail can reach the Earth when its orbit's MOID is below this, au. */
     public static final double SCREEN_MOID_AU = 0.05;
+    /** Dust production assumed for a stream that gives none (relative intensities only), kg/s. */
+    public static final double REFERENCE_DUST_KG_S = 1.0;
+    /** Crossings are collected this many days beyond the span's ends, for meetings near 1 January. */
+    public static final double EDGE_DAYS = 40.0;
 
     private ForecastRun() {
     }
@@ -96,18 +180,32 @@ public final class ForecastRun {
     public static Result run(StreamDefinition stream, Ephemeris ephemeris, Settings s, Consumer<String> log,
             Progress progress, TrailCheckpoint checkpoint) {
         long t0 = System.nanoTime();
-        if (s.sinceYear() >= s.year()) {
-            throw new IllegalArgumentException("--since " + s.sinceYear() + " must be before --year " + s.year());
+        if (s.lastYear() < s.firstYear()) {
+            throw new IllegalArgumentException("--year " + s.firstYear() + ".." + s.lastYear() + ": the span is reversed");
         }
-        if (s.particles() < 10) {
-            throw new IllegalArgumentException("--particles must be >= 10, got " + s.particles());
+        if (s.lastYear() - s.firstYear() > 200) {
+            throw new IllegalArgumentException("--year " + s.firstYear() + ".." + s.lastYear() + ": at most 200 years in one run");
         }
-        double windowStart = ParentReturns.yearStart(s.year());
-        double windowEnd = ParentReturns.yearStart(s.year() + 1);
+        if (s.sinceYear() >= s.firstYear()) {
+            throw new IllegalArgumentException("--since " + s.sinceYear() + " must be before --year " + s.firstYear());
+        }
+        if (s.particles() < 50) {
+            throw new IllegalArgumentException("--particles must be >= 50, got " + s.particles());
+        }
+        boolean absolute = stream.parent().dustProductionKgS() != null;
+        StreamDefinition run = absolute ? stream : withDust(stream, REFERENCE_DUST_KG_S);
+        double[] years = new double[s.lastYear() - s.firstYear() + 2];
+        for (int y = 0; y < years.length; y++) {
+            years[y] = ParentReturns.yearStart(s.firstYear() + y);
+        }
+        double spanStart = years[0];
+        double spanEnd = years[years.length - 1];
+        double windowStart = spanStart - EDGE_DAYS;
+        double windowEnd = spanEnd + EDGE_DAYS;
         ephemeris.checkSpan(windowStart);
         ephemeris.checkSpan(windowEnd);
-        ParentReturns.Result returns = ParentReturns.compute(stream.parent(), ephemeris, s.sinceYear(), s.year());
-        List<Perihelion> chosen = new ArrayList<>(returns.returns().stream().filter(p -> p.t() < windowStart - 30)
+        ParentReturns.Result returns = ParentReturns.compute(run.parent(), ephemeris, s.sinceYear(), s.firstYear());
+        List<Perihelion> chosen = new ArrayList<>(returns.returns().stream().filter(p -> p.t() < spanStart - 30)
                 .filter(p -> !s.screen() || trailcross.orbit.Moid.of(p.elements(),
                         trailcross.encounter.EarthOrbit.at(ephemeris, p.t())) <= SCREEN_MOID_AU).toList());
         if (s.maxReturns() > 0 && chosen.size() > s.maxReturns()) {
@@ -116,7 +214,7 @@ public final class ForecastRun {
         if (chosen.isEmpty()) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "%s has no perihelion return between %d and %d whose trail could reach %d",
-                    stream.parent().name(), s.sinceYear(), s.year(), s.year()));
+                    stream.parent().name(), s.sinceYear(), s.firstYear(), s.firstYear()));
         }
         log.accept(String.format(Locale.ROOT, "%d returns since %d: %s", chosen.size(), s.sinceYear(),
                 String.join(", ", chosen.stream().map(p -> Integer.toString(ParentReturns.yearOf(p.t()))).toList())));
@@ -125,33 +223,116 @@ public final class ForecastRun {
         for (Perihelion p : chosen) {
             int ry = ParentReturns.yearOf(p.t());
             long tp = System.nanoTime();
-            List<NodeCrossing> crossings = checkpoint == null ? null : checkpoint.read(ry);
-            boolean resumed = crossings != null;
-            if (!resumed) {
-                ReturnCloud rc = ReturnCloud.from(stream, ephemeris, returns.history(), p, ry);
-                List<Meteoroid> cloud = rc.generator().generate(s.particles(), s.seed() * 1_000_003L + ry, false,
-                        s.threads());
-                try (Progress.Stage stage = progress.open("trail " + ry, cloud.size())) {
-                    crossings = TrailPropagation.run(cloud, ephemeris, windowStart, windowEnd, s.threads(), stage)
-                            .crossings();
-                }
+            TrailCheckpoint.Saved saved = checkpoint == null ? null : checkpoint.read(ry);
+            boolean resumed = saved != null;
+            List<NodeCrossing> crossings;
+            List<NodeCrossing> axis;
+            String sampling;
+            if (resumed) {
+                crossings = saved.crossings();
+                axis = saved.axis();
+                sampling = "read back from the saved run";
+            } else {
+                ReturnCloud rc = ReturnCloud.from(run, ephemeris, returns.history(), p, ry);
+                TargetedEjection.Cloud cloud = TargetedEjection.run(rc.generator(), ephemeris, windowStart, windowEnd,
+                        spanStart, spanEnd, s.particles(), s.seed() * 1_000_003L + ry, s.targeted(), s.threads(),
+                        progress, "trail " + ry);
+                crossings = cloud.crossings();
+                sampling = cloud.description();
+                double parentP = TrailAxis.parentPeriod(p);
+                double[] range = cloud.periodRange(parentP);
+                axis = TrailAxis.compute(p, range[0], range[1], ephemeris, windowStart, windowEnd, years, s.threads());
                 if (checkpoint != null) {
-                    checkpoint.write(ry, crossings);
+                    checkpoint.write(ry, crossings, axis);
                 }
             }
             List<Encounter> enc = new ArrayList<>();
             for (NodeCrossing c : crossings) {
-                enc.add(Encounter.of(c, ephemeris));
+                enc.add(Encounter.of(c, ephemeris, spanStart, spanEnd));
             }
-            TrailEncounter meeting = TrailEncounter.of(enc, Double.isFinite(period) ? period : p.elements().period(),
-                    stream.populationIndex(), ephemeris);
-            trails.add(new Trail(p, ry, s.particles(), enc, meeting));
-            log.accept(String.format(Locale.ROOT, "trail %d: %d particles %s in %.1f s, %d crossings, %s", ry,
-                    s.particles(), resumed ? "read back from the saved run" : "propagated", (System.nanoTime() - tp) / 1e9,
-                    enc.size(),
-                    meeting == null ? "too few near the Earth" : String.format(Locale.ROOT, "delta r %+.5f au",
-                            meeting.deltaR())));
+            double parentPeriod = Double.isFinite(period) ? period : p.elements().period();
+            List<Meeting> meetings = new ArrayList<>();
+            for (int y = 0; y + 1 < years.length; y++) {
+                double from = years[y];
+                double to = years[y + 1];
+                List<Encounter> inYear = enc.stream().filter(e -> e.earthT() >= from && e.earthT() < to).toList();
+                TrailEncounter cloudMeeting = TrailEncounter.of(inYear, parentPeriod, stream.populationIndex(), ephemeris);
+                if (cloudMeeting != null && (cloudMeeting.peakT() < from || cloudMeeting.peakT() >= to)) {
+                    cloudMeeting = null;
+                }
+                List<AxisMeeting.Root> roots = AxisMeeting.of(TrailAxis.points(axis, TrailAxis.parentPeriod(p), ephemeris,
+                        from, to), 3 * axisSpacing(axis, TrailAxis.parentPeriod(p)));
+                AxisMeeting.Root root = roots.stream().filter(r -> r.peakT() >= from && r.peakT() < to)
+                        .filter(r -> Math.abs(r.deltaR()) < TrailPropagation.R_MAX - 1).findFirst().orElse(null);
+                if (cloudMeeting != null || (root != null && Math.abs(root.deltaR()) <= AXIS_MEETING_AU)) {
+                    double peak = cloudMeeting != null ? cloudMeeting.peakT() : root.peakT();
+                    meetings.add(new Meeting(s.firstYear() + y, ry, (int) Math.round((peak - p.t()) / parentPeriod),
+                            cloudMeeting, root, Double.NaN));
+                }
+            }
+            trails.add(new Trail(p, ry, s.particles(), enc, axis, meetings));
+            StringBuilder line = new StringBuilder(String.format(Locale.ROOT, "trail %d: %d particles %s in %.1f s, %d crossings",
+                    ry, s.particles(), sampling, (System.nanoTime() - tp) / 1e9, enc.size()));
+            for (Meeting m : meetings) {
+                line.append(String.format(Locale.ROOT, "; %d: ", m.year()));
+                line.append(m.cloud() == null ? "cloud too thin" : String.format(Locale.ROOT,
+                        "delta r %+.5f au, ESS %.0f", m.cloud().deltaR(), m.cloud().ess()));
+                if (m.axis() != null) {
+                    line.append(String.format(Locale.ROOT, ", axis delta r %+.5f au", m.axis().deltaR()));
+                }
+            }
+            if (meetings.isEmpty()) {
+                line.append(", too few near the Earth");
+            }
+            log.accept(line.toString());
         }
-        return new Result(s, trails, (System.nanoTime() - t0) / 1e9);
+        // Relative intensities: against the run's strongest cloud meeting.
+        double max = 0;
+        for (Trail t : trails) {
+            for (Meeting m : t.meetings()) {
+                if (m.cloud() != null) {
+                    max = Math.max(max, m.cloud().zhr());
+                }
+            }
+        }
+        List<Trail> out = new ArrayList<>();
+        for (Trail t : trails) {
+            List<Meeting> ms = new ArrayList<>();
+            for (Meeting m : t.meetings()) {
+                ms.add(new Meeting(m.year(), m.returnYear(), m.revolutions(), m.cloud(), m.axis(),
+                        m.cloud() == null || max == 0 ? Double.NaN : m.cloud().zhr() / max));
+            }
+            out.add(new Trail(t.perihelion(), t.returnYear(), t.particles(), t.encounters(), t.axisCrossings(), ms));
+        }
+        return new Result(s, out, (System.nanoTime() - t0) / 1e9, absolute);
+    }
+
+    /** An axis meeting farther from the Earth's path than this, without a cloud meeting, is not listed, au. */
+    public static final double AXIS_MEETING_AU = 0.01;
+
+    /** The coarse family's spacing in period offset, days. */
+    private static double axisSpacing(List<NodeCrossing> axis, double parentPeriod) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (NodeCrossing c : axis) {
+            if (c.id() < TrailAxis.COARSE) {
+                lo = Math.min(lo, c.initialPeriod() - parentPeriod);
+                hi = Math.max(hi, c.initialPeriod() - parentPeriod);
+            }
+        }
+        return hi > lo ? (hi - lo) / (TrailAxis.COARSE - 1) : 1;
+    }
+
+    /**
+     * @param stream a stream
+     * @param kgS a dust production
+     * @return the same stream with that dust production
+     */
+    public static StreamDefinition withDust(StreamDefinition stream, double kgS) {
+        ParentBody b = stream.parent();
+        ParentBody nb = new ParentBody(b.name(), b.epoch(), b.elements(), b.a1(), b.a2(), b.a3(), b.radiusKm(),
+                b.densityKgM3(), kgS, b.gasProductionMolS());
+        return new StreamDefinition(stream.source(), stream.name(), stream.description(), stream.populationIndex(), nb,
+                stream.ejection(), stream.particles());
     }
 }

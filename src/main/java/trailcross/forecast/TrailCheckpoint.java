@@ -61,14 +61,28 @@ public final class TrailCheckpoint {
     }
 
     /**
+     * A finished trail.
+     *
+     * @param crossings the cloud's crossings, final weights
+     * @param axis the axis family's crossings
+     */
+    public record Saved(List<NodeCrossing> crossings, List<NodeCrossing> axis) {
+    }
+
+    /**
      * @param returnYear a trail
      * @return its saved crossings, or null when it has not been finished
      */
-    public List<NodeCrossing> read(int returnYear) {
+    public Saved read(int returnYear) {
         Path f = file(returnYear);
-        if (!Files.exists(f)) {
+        Path a = dir.resolve("trail-" + returnYear + "-axis.csv");
+        if (!Files.exists(f) || !Files.exists(a)) {
             return null;
         }
+        return new Saved(readFile(f), readFile(a));
+    }
+
+    private static List<NodeCrossing> readFile(Path f) {
         List<NodeCrossing> out = new ArrayList<>();
         try (Reader r = Files.newBufferedReader(f, StandardCharsets.US_ASCII);
                 CSVParser csv = CSVParser.parse(r, CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).build())) {
@@ -91,9 +105,16 @@ public final class TrailCheckpoint {
     /**
      * @param returnYear a trail
      * @param crossings its crossings
+     * @param axis its axis family's crossings
      */
-    public void write(int returnYear, List<NodeCrossing> crossings) {
-        AtomicFile.write(file(returnYear), w -> {
+    public void write(int returnYear, List<NodeCrossing> crossings, List<NodeCrossing> axis) {
+        // The axis first: a trail counts as finished only when its cloud's file exists too.
+        writeFile(dir.resolve("trail-" + returnYear + "-axis.csv"), axis);
+        writeFile(file(returnYear), crossings);
+    }
+
+    private static void writeFile(Path file, List<NodeCrossing> crossings) {
+        AtomicFile.write(file, w -> {
             try (CSVPrinter p = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setHeader(HEADER).setRecordSeparator('\n').build())) {
                 for (NodeCrossing c : crossings) {
                     double[] s = c.state();

@@ -14,7 +14,6 @@ import trailcross.encounter.EarthOrbit;
 import trailcross.encounter.NodeCrossing;
 import trailcross.ephemeris.Ephemeris;
 import trailcross.orbit.Elements;
-import trailcross.orbit.StateVector;
 
 /**
  * Carries a meteoroid cloud from its ejection to the end of a target window with the full force model
@@ -59,6 +58,22 @@ public final class TrailPropagation {
      */
     public static Result run(List<Meteoroid> cloud, Ephemeris ephemeris, double windowStart, double windowEnd,
             int threads, LongConsumer progress) {
+        return run(cloud, new ForceModelFactory(ephemeris, true, true), ephemeris, windowStart, windowEnd, threads,
+                progress);
+    }
+
+    /**
+     * @param cloud the particles (each at its ejection)
+     * @param forces the force model
+     * @param ephemeris the planets (the Earth's plane)
+     * @param windowStart first instant of the window, TDB days since J2000
+     * @param windowEnd last instant
+     * @param threads worker threads
+     * @param progress called with the particles done so far, or null
+     * @return the crossings and outcomes
+     */
+    public static Result run(List<Meteoroid> cloud, ForceModelFactory forces, Ephemeris ephemeris, double windowStart,
+            double windowEnd, int threads, LongConsumer progress) {
         if (cloud.isEmpty()) {
             throw new IllegalArgumentException("no particles to propagate");
         }
@@ -79,11 +94,10 @@ public final class TrailPropagation {
             }
             particles.add(m.toTestParticle());
         }
-        Propagator prop = new Propagator(new ForceModelFactory(ephemeris, true, true), EPSILON, 1e4, threads);
+        Propagator prop = new Propagator(forces, EPSILON, 1e4, threads);
         List<Outcome> outcomes = prop.propagate(particles, windowEnd, p -> {
             Meteoroid m = byId.get(p.id());
-            double p0 = Elements.of(StateVector.of(m.state()), m.t() + 2451545.0,
-                    trailcross.ephemeris.Body.SUN.gm() * (1 - m.beta())).period();
+            double p0 = trailcross.ejection.ParticleGenerator.periodAtEjection(m.state(), m.beta());
             CrossingFinder f = new CrossingFinder(normal, windowStart, windowEnd, R_MIN, R_MAX, m.id(), m.returnT(),
                     m.weight(), m.massKg(), p0);
             finders.put(p.id(), f);

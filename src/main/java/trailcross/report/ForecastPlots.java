@@ -16,7 +16,10 @@ import org.jfree.chart.axis.DateAxis;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.DeviationRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.data.xy.YIntervalSeries;
+import org.jfree.data.xy.YIntervalSeriesCollection;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import trailcross.encounter.Encounter;
@@ -56,7 +59,16 @@ public final class ForecastPlots {
         System.setProperty("java.awt.headless", "true");
         List<Path> out = new ArrayList<>();
         out.add(save(dir.resolve("node-map.png"), nodeMap(title, r)));
-        out.add(save(dir.resolve("activity.png"), activity(title, r)));
+        if (r.settings().span()) {
+            for (int y = r.settings().firstYear(); y <= r.settings().lastYear(); y++) {
+                int year = y;
+                if (r.meetings().stream().anyMatch(m -> m.year() == year && m.cloud() != null)) {
+                    out.add(save(dir.resolve("activity-" + y + ".png"), activity(title, r, y)));
+                }
+            }
+        } else {
+            out.add(save(dir.resolve("activity.png"), activity(title, r, r.settings().firstYear())));
+        }
         out.add(save(dir.resolve("radiants.png"), radiants(title, r, table)));
         return out;
     }
@@ -85,30 +97,57 @@ public final class ForecastPlots {
                 + " days of the Earth)", plot);
     }
 
-    private static JFreeChart activity(String title, ForecastRun.Result r) {
-        XYSeriesCollection data = new XYSeriesCollection();
-        for (ForecastRun.Trail t : r.meetings()) {
-            TrailEncounter m = t.meeting();
-            double sigmaH = Math.max(m.fwhmHours(), 0.05) / 2.3548;
-            double amp = Double.isNaN(m.zhr()) ? 1.0 : m.zhr();
-            XYSeries s = new XYSeries(t.returnYear() + " trail");
-            for (int k = -80; k <= 80; k++) {
-                double h = k * sigmaH / 20;
-                double ms = (m.peakT() + h / 24 + 10957.5) * 86400000.0;
-                s.add(ms, amp * Math.exp(-0.5 * (h / sigmaH) * (h / sigmaH)));
+    /**
+     * The activity profiles of one year's meetings: each cloud meeting's ZHR (or relative intensity) against
+     * time with its resampling band (16th–84th percentiles), each over its peak ± 3 FWHM (at least ± 1 h); the
+     * time axis spans those hours only. One colour per trail, none reused in a plot.
+     */
+    private static JFreeChart activity(String title, ForecastRun.Result r, int year) {
+        YIntervalSeriesCollection data = new YIntervalSeriesCollection();
+        double max = 0;
+        for (ForecastRun.Meeting mt : r.meetings()) {
+            if (mt.year() == year && mt.cloud() != null) {
+                max = Math.max(max, mt.cloud().zhr());
+            }
+        }
+        double scale = r.absolute() || max == 0 ? 1 : 1 / max;
+        for (ForecastRun.Meeting mt : r.meetings()) {
+            TrailEncounter m = mt.cloud();
+            if (mt.year() != year || m == null) {
+                continue;
+            }
+            YIntervalSeries s = new YIntervalSeries(mt.returnYear() + " trail");
+            double half = Math.max(3 * m.fwhmHours(), 1.0) / 24;
+            double[] t = m.profileTimes();
+            var prof = m.profile();
+            for (int k = 0; k < t.length; k++) {
+                if (Math.abs(t[k] - m.peakT()) <= half) {
+                    double ms = (t[k] + 10957.5) * 86400000.0;
+                    s.add(ms, prof.value()[k] * scale, prof.low()[k] * scale, prof.high()[k] * scale);
+                }
             }
             data.addSeries(s);
         }
-        DateAxis time = new DateAxis("UTC");
+        DateAxis time = new DateAxis("UTC (" + year + ")");
         time.setTimeZone(java.util.TimeZone.getTimeZone("UTC"));
-        XYLineAndShapeRenderer lines = new XYLineAndShapeRenderer(true, false);
-        style(lines, data.getSeriesCount());
-        XYPlot plot = new XYPlot(data, time, axis(anyZhr(r) ? "ZHR" : "relative rate", true), lines);
-        return chart(title + ": activity profile (model; see the table's uncertainties)", plot);
+        DeviationRenderer lines = new DeviationRenderer(true, false);
+        for (int k = 0; k < data.getSeriesCount(); k++) {
+            Color c = colour(k, data.getSeriesCount());
+            lines.setSeriesPaint(k, c);
+            lines.setSeriesFillPaint(k, c);
+            lines.setSeriesStroke(k, new BasicStroke(2f));
+        }
+        lines.setAlpha(0.25f);
+        XYPlot plot = new XYPlot(data, time, axis(r.absolute() ? "ZHR" : "relative intensity", true), lines);
+        return chart(title + ": activity profile (model; bands: resampling 16-84%)", plot);
     }
 
-    private static boolean anyZhr(ForecastRun.Result r) {
-        return r.meetings().stream().anyMatch(t -> !Double.isNaN(t.meeting().zhr()));
+    /** The k-th of n distinct colours: the palette, then evenly spaced hues when it runs out. */
+    static Color colour(int k, int n) {
+        if (n <= PALETTE.length) {
+            return PALETTE[k];
+        }
+        return Color.getHSBColor((float) k / n, 0.75f, 0.8f);
     }
 
     private static JFreeChart radiants(String title, ForecastRun.Result r, List<RadiantTable.Row> table) {
@@ -163,7 +202,7 @@ public final class ForecastPlots {
 
     private static void style(XYLineAndShapeRenderer r, int series) {
         for (int k = 0; k < series; k++) {
-            r.setSeriesPaint(k, PALETTE[k % PALETTE.length]);
+            r.setSeriesPaint(k, colour(k, series));
             r.setSeriesShape(k, new java.awt.geom.Ellipse2D.Double(-2.5, -2.5, 5, 5));
             r.setSeriesStroke(k, new BasicStroke(2f));
         }

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
+import trailcross.encounter.AxisMeeting;
 import trailcross.encounter.Encounter;
 import trailcross.encounter.RadiantTable;
 import trailcross.encounter.TrailEncounter;
@@ -44,15 +45,44 @@ public final class ForecastWriter {
             String ephemerisName, String version) {
         List<Path> written = new ArrayList<>();
         Path enc = dir.resolve("encounters.csv");
+        boolean span = r.settings().span();
         AtomicFile.write(enc, w -> {
+            List<String> header = new ArrayList<>(List.of("return_year", "revolutions", "peak_utc", "solar_longitude_deg",
+                    "delta_r_au", "particles", "ra_deg", "dec_deg", "vg_km_s", "fwhm_h", "zhr", "peak_sigma_min",
+                    "axis_peak_utc", "axis_delta_r_au", "fm", "ess", "zhr_sigma", "relative_intensity", "axis_fm",
+                    "axis_solar_longitude_deg", "axis_sigma_min", "times_disagree"));
+            if (span) {
+                header.add(0, "year");
+            }
             try (CSVPrinter p = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setRecordSeparator('\n')
-                    .setHeader("return_year", "revolutions", "peak_utc", "solar_longitude_deg", "delta_r_au", "particles",
-                            "ra_deg", "dec_deg", "vg_km_s", "fwhm_h", "zhr").build())) {
-                for (ForecastRun.Trail t : r.meetings()) {
-                    TrailEncounter m = t.meeting();
-                    p.printRecord(t.returnYear(), m.revolutions(), utc(m.peakT()), f(m.solarLongitudeDeg(), 4),
-                            f(m.deltaR(), 6), m.particles(), f(m.raDeg(), 2), f(m.decDeg(), 2), f(m.vgKmS(), 2),
-                            f(m.fwhmHours(), 2), Double.isNaN(m.zhr()) ? "" : f(m.zhr(), 0));
+                    .setHeader(header.toArray(String[]::new)).build())) {
+                for (ForecastRun.Meeting mt : r.meetings()) {
+                    TrailEncounter m = mt.cloud();
+                    AxisMeeting.Root a = mt.axis();
+                    List<Object> row = new ArrayList<>();
+                    if (span) {
+                        row.add(mt.year());
+                    }
+                    row.add(mt.returnYear());
+                    if (m != null) {
+                        row.addAll(List.of(m.revolutions(), utc(m.peakT()), f(m.solarLongitudeDeg(), 4), f(m.deltaR(), 6),
+                                m.particles(), f(m.raDeg(), 2), f(m.decDeg(), 2), f(m.vgKmS(), 2), f(m.fwhmHours(), 2),
+                                r.absolute() ? f(m.zhr(), 0) : "", f(m.peakSigmaMin(), 1)));
+                    } else {
+                        row.addAll(List.of(mt.revolutions(), utc(a.peakT()), f(a.solarLongitudeDeg(), 4),
+                                f(a.deltaR(), 6), 0, "", "", "", "", "", ""));
+                    }
+                    row.add(a == null ? "" : utc(a.peakT()));
+                    row.add(a == null ? "" : f(a.deltaR(), 6));
+                    row.add(m == null ? "" : f(m.fM(), 4));
+                    row.add(m == null ? "" : f(m.ess(), 1));
+                    row.add(m == null || !r.absolute() ? "" : f(m.zhrSigma(), 0));
+                    row.add(Double.isNaN(mt.relativeIntensity()) ? "" : f(mt.relativeIntensity(), 4));
+                    row.add(a == null ? "" : f(a.fM(), 4));
+                    row.add(a == null ? "" : f(a.solarLongitudeDeg(), 4));
+                    row.add(a == null ? "" : f(a.sigmaMin(), 1));
+                    row.add(mt.timesDisagree());
+                    p.printRecord(row);
                 }
             }
         });
@@ -114,6 +144,21 @@ public final class ForecastWriter {
             w.write("  \"ephemeris\": " + json(ephemerisName) + ",\n");
             w.write("  \"returns\": [" + String.join(", ", r.trails().stream().map(t -> Integer.toString(t.returnYear())).toList()) + "],\n");
             w.write("  \"trails_meeting_the_earth\": " + r.meetings().size() + ",\n");
+            w.write("  \"last_year\": " + s.lastYear() + ",\n");
+            w.write("  \"sampling\": " + json(s.targeted() ? "targeted" : "plain") + ",\n");
+            w.write("  \"zhr_absolute\": " + r.absolute() + ",\n");
+            w.write("  \"trails\": [\n");
+            List<String> items = new ArrayList<>();
+            for (ForecastRun.Meeting mt : r.meetings()) {
+                TrailEncounter m = mt.cloud();
+                items.add(String.format(Locale.ROOT, "    {\"year\": %d, \"return_year\": %d, \"ess\": %s, \"peak_utc\": %s, "
+                        + "\"peak_sigma_min\": %s, \"axis_peak_utc\": %s, \"axis_delta_r_au\": %s}", mt.year(),
+                        mt.returnYear(), m == null ? "null" : f(m.ess(), 1), json(utc(mt.peakT())),
+                        m == null ? "null" : f(m.peakSigmaMin(), 1), mt.axis() == null ? "null" : json(utc(mt.axis().peakT())),
+                        mt.axis() == null ? "null" : f(mt.axis().deltaR(), 6)));
+            }
+            w.write(String.join(",\n", items));
+            w.write(items.isEmpty() ? "  ],\n" : "\n  ],\n");
             w.write("  \"run_seconds\": " + f(r.seconds(), 1) + ",\n");
             w.write("  \"caution\": " + json(CAUTION) + "\n");
             w.write("}\n");

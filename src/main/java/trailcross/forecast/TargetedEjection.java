@@ -1,0 +1,280 @@
+package trailcross.forecast;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.apache.commons.math3.stat.regression.SimpleRegression;
+import trailcross.ejection.ImportanceWeights;
+import trailcross.ejection.Meteoroid;
+import trailcross.ejection.ParticleGenerator;
+import trailcross.ejection.PeriodFocus;
+import trailcross.encounter.Encounter;
+import trailcross.encounter.NodeCrossing;
+import trailcross.ephemeris.Ephemeris;
+
+/**
+ * Targeted ejection, adaptive importance sampling in the period at ejection P0 (Cappé et al. 2004,
+ * population Monte Carlo; Cornuet et al. 2012, AMIS): a pilot cloud drawn from the stream's own ejection
+ * law ({@value #PILOT_SHARE} of the particles) shows which periods put a particle at its node near the Earth
+ * in the forecast years (its node passage within a window of the Earth's passage of the same longitude);
+ * a second stage ({@value #SECOND_SHARE}) is drawn from a proposal concentrated there
+ * ({@link PeriodFocus#learn}, bandwidth widened to explore), and the main stage (the rest) from a proposal
+ * learned again on both earlier stages with a narrower window. When no pilot particle comes near yet, the
+ * period that would is extrapolated from the pilot's node times (least squares) and aimed at. Every stage's
+ * particles are kept and weighted by the balance heuristic ({@link ImportanceWeights}), so every weighted
+ * sum stays an unbiased estimate of the plain cloud's.
+ */
+public final class TargetedEjection {
+
+    /** Share of the particles in the pilot stage (the prior). */
+    public static final double PILOT_SHARE = 0.2;
+    /** Share in the second stage. */
+    public static final double SECOND_SHARE = 0.2;
+    /** Prior draws per size bin for a proposal's normalising constant (relative error ~1/√(draws Z)). */
+    public static final int Z_DRAWS = 200_000;
+    /** Share of a proposal's particles meant to come from its defensive floor. */
+    public static final double DEFENSIVE_SHARE = 0.1;
+    /** Learning windows, days: the second stage's, then the main stage's (each doubled until enough hits). */
+    private static final double[] WINDOWS = {30, 10};
+    /** Hits (distinct particles) wanted in a learning window before it stops widening. */
+    private static final int[] ENOUGH_HITS = {5, 20};
+    /** Bandwidth factors of the second and main stages' proposals. */
+    private static final double[] WIDEN = {2.0, 1.2};
+    private static final double MAX_WINDOW = 160;
+
+    /**
+     * A cloud's crossings with their final weights.
+     *
+     * @param crossings every crossing in the window, weights = real meteoroids (importance included)
+     * @param weights the stages
+     * @param hitPeriods the periods at ejection of the particles that came near the Earth
+     * @param description one line for the log
+     */
+    public record Cloud(List<NodeCrossing> crossings, ImportanceWeights weights, double[] hitPeriods, String description) {
+
+        /**
+         * The period offsets the trail's axis should span: those of the particles that came near the Earth,
+         * widened by half their range on each side (at least 2 days), else those of every crossing.
+         *
+         * @param parentPeriod the parent's period at the return, days
+         * @return least and greatest offset, days
+         */
+        public double[] periodRange(double parentPeriod) {
+            double[] p = hitPeriods.length >= 3 ? hitPeriods
+                    : crossings.stream().mapToDouble(NodeCrossing::initialPeriod).filter(Double::isFinite).toArray();
+            if (p.length < 2) {
+                return new double[] {-0.02 * parentPeriod, 0.02 * parentPeriod};
+            }
+            double lo = java.util.Arrays.stream(p).min().orElseThrow() - parentPeriod;
+            double hi = java.util.Arrays.stream(p).max().orElseThrow() - parentPeriod;
+            double pad = Math.max(2, 0.5 * (hi - lo));
+            return new double[] {lo - pad, hi + pad};
+        }
+    }
+
+    private TargetedEjection() {
+    }
+
+    /**
+     * @param gen the return's generator
+     * @param ephemeris the planets
+     * @param windowStart crossings from here, TDB days since J2000
+     * @param windowEnd to here
+     * @param spanStart the forecast span's start (the Earth's passages inside the span count)
+     * @param spanEnd its end
+     * @param n particles in all
+     * @param seed the trail's seed
+     * @param targeted false: one plain stage of n particles
+     * @param threads worker threads
+     * @param progress where the propagation reports
+     * @param label the progress label
+     * @return the weighted crossings
+     */
+    public static Cloud run(ParticleGenerator gen, Ephemeris ephemeris, double windowStart, double windowEnd,
+            double spanStart, double spanEnd, int n, long seed, boolean targeted, int threads, Progress progress,
+            String label) {
+        return run(gen, new trailcross.dynamics.ForceModelFactory(ephemeris, true, true), ephemeris, windowStart,
+                windowEnd, spanStart, spanEnd, n, seed, targeted, threads, progress, label);
+    }
+
+    /**
+     * @param gen the return's generator
+     * @param forces the force model
+     * @param ephemeris the planets
+     * @param windowStart crossings from here, TDB days since J2000
+     * @param windowEnd to here
+     * @param spanStart the forecast span's start (the Earth's passages inside the span count)
+     * @param spanEnd its end
+     * @param n particles in all
+     * @param seed the trail's seed
+     * @param targeted false: one plain stage of n particles
+     * @param threads worker threads
+     * @param progress where the propagation reports
+     * @param label the progress label
+     * @return the weighted crossings
+     */
+    public static Cloud run(ParticleGenerator gen, trailcross.dynamics.ForceModelFactory forces, Ephemeris ephemeris,
+            double windowStart, double windowEnd,
+            double spanStart, double spanEnd, int n, long seed, boolean targeted, int threads, Progress progress,
+            String label) {
+        ImportanceWeights weights = new ImportanceWeights(gen);
+        List<NodeCrossing> raw = new ArrayList<>();
+        List<Encounter> enc = new ArrayList<>();
+        int[] sizes = targeted ? new int[] {(int) (n * PILOT_SHARE), (int) (n * SECOND_SHARE), 0} : new int[] {n};
+        if (targeted) {
+            sizes[2] = n - sizes[0] - sizes[1];
+        }
+        List<Meteoroid> prior = null;
+        StringBuilder what = new StringBuilder(targeted ? "targeted" : "plain");
+        try (Progress.Stage stage = progress.open(label, n)) {
+            long first = 0;
+            for (int k = 0; k < sizes.length; k++) {
+                PeriodFocus focus = k == 0 ? PeriodFocus.PRIOR : learn(enc, raw, weights, prior, k - 1);
+                double[] allocation = k == 0 ? null : allocation(gen, enc);
+                long stageSeed = k == 0 ? seed : seed + 7_919_000_003L * k;
+                List<Meteoroid> cloud = gen.generate(sizes[k], stageSeed, false, threads, focus, first, allocation);
+                double[] z = gen.meanAcceptance(focus, Z_DRAWS, stageSeed ^ 0x5DEECE66DL);
+                weights.add(new ImportanceWeights.Stage(focus, first, sizes[k], z, allocation));
+                if (k == 0) {
+                    prior = cloud;
+                }
+                if (!focus.isPrior()) {
+                    what.append(String.format(Locale.ROOT, ", stage %d %s Z %.4f", k + 1, focus, mean(z)));
+                }
+                long done = first;
+                List<NodeCrossing> c = TrailPropagation.run(cloud, forces, ephemeris, windowStart, windowEnd, threads,
+                        d -> stage.accept(done + d)).crossings();
+                raw.addAll(c);
+                for (NodeCrossing x : c) {
+                    enc.add(Encounter.of(x, ephemeris, spanStart, spanEnd));
+                }
+                first += sizes[k];
+            }
+        }
+        List<NodeCrossing> out = new ArrayList<>(raw.size());
+        for (NodeCrossing c : raw) {
+            out.add(new NodeCrossing(c.id(), c.returnT(), weights.weight(c.id(), c.initialPeriod()), c.massKg(),
+                    c.initialPeriod(), c.t(), c.state(), c.ascending()));
+        }
+        return new Cloud(out, weights, hits(enc, WINDOWS[WINDOWS.length - 1], 3), what.toString());
+    }
+
+    /** Least share of a later stage's particles in any size bin. */
+    public static final double MIN_BIN_SHARE = 0.03;
+
+    /**
+     * The later stages' shares of the size bins: in proportion to the bins' numbers of meteoroids bright
+     * enough to be seen (heavier than the +6.5-mag mass at the pilot's median Vg), since the ZHR is a sum
+     * over those (proportional allocation), each bin keeping at least {@value #MIN_BIN_SHARE} (the large,
+     * tightly grouped grains time the trail).
+     */
+    private static double[] allocation(ParticleGenerator gen, List<Encounter> enc) {
+        if (!gen.stratified() || enc.isEmpty()) {
+            return null;
+        }
+        double[] vg = enc.stream().mapToDouble(e -> e.radiant().vgKmS()).sorted().toArray();
+        double limit = trailcross.encounter.TrailEncounter.massLimitKg(vg[vg.length / 2]);
+        int bins = gen.sizes().bins();
+        double[] f = new double[bins];
+        double total = 0;
+        for (int k = 0; k < bins; k++) {
+            f[k] = gen.sizes().numberFractionAbove(k, limit);
+            total += f[k];
+        }
+        if (!(total > 0)) {
+            return null;
+        }
+        double[] share = new double[bins];
+        double free = 1 - MIN_BIN_SHARE * bins;
+        for (int k = 0; k < bins; k++) {
+            share[k] = MIN_BIN_SHARE + free * f[k] / total;
+        }
+        return share;
+    }
+
+    /** The proposal of stage k + 1, learned on the crossings so far. */
+    private static PeriodFocus learn(List<Encounter> enc, List<NodeCrossing> raw, ImportanceWeights weights,
+            List<Meteoroid> prior, int k) {
+        Map<Long, double[]> best = nearest(enc);
+        if (best.isEmpty()) {
+            return PeriodFocus.PRIOR;
+        }
+        double window = WINDOWS[k];
+        List<double[]> hits = new ArrayList<>();
+        for (; window <= MAX_WINDOW; window *= 2) {
+            hits.clear();
+            for (var e : best.entrySet()) {
+                if (Math.abs(e.getValue()[0]) <= window && Double.isFinite(e.getValue()[1])) {
+                    hits.add(new double[] {e.getValue()[1], weights.importance(e.getKey(), e.getValue()[1])});
+                }
+            }
+            if (hits.size() >= ENOUGH_HITS[k]) {
+                break;
+            }
+        }
+        PeriodFocus shape;
+        if (hits.size() >= 3) {
+            double[] p = hits.stream().mapToDouble(h -> h[0]).toArray();
+            double[] w = hits.stream().mapToDouble(h -> h[1]).toArray();
+            shape = PeriodFocus.learn(p, w, WIDEN[k], 0.01, 1e-9);
+            return withFloor(shape, prior, f -> PeriodFocus.learn(p, w, WIDEN[k], 0.01, f));
+        }
+        // Nobody near yet: aim where the pilot's node times extrapolate to the Earth's passage.
+        SimpleRegression fit = new SimpleRegression();
+        for (double[] v : best.values()) {
+            if (Double.isFinite(v[1])) {
+                fit.addData(v[1], v[0]);
+            }
+        }
+        if (fit.getN() < 5 || !(Math.abs(fit.getSlope()) > 0.1)) {
+            return PeriodFocus.PRIOR;
+        }
+        double centre = -fit.getIntercept() / fit.getSlope();
+        double width = Math.max(0.5, 2 * Math.sqrt(fit.getMeanSquareError()) / Math.abs(fit.getSlope()));
+        return withFloor(PeriodFocus.around(centre, width, 1e-9), prior, f -> PeriodFocus.around(centre, width, f));
+    }
+
+    /**
+     * The floor that gives the defensive part about {@link #DEFENSIVE_SHARE} of the proposal's particles:
+     * floor = share/(1 − share) × E_p[shape], the shape's prior mean estimated on the pilot (a prior sample).
+     */
+    private static PeriodFocus withFloor(PeriodFocus shape, List<Meteoroid> prior,
+            java.util.function.DoubleFunction<PeriodFocus> make) {
+        double mean = 0;
+        for (Meteoroid m : prior) {
+            mean += shape.acceptance(ParticleGenerator.periodAtEjection(m.state(), m.beta())) / prior.size();
+        }
+        double floor = Math.min(0.5, Math.max(1e-4, DEFENSIVE_SHARE / (1 - DEFENSIVE_SHARE) * mean));
+        return make.apply(floor);
+    }
+
+    /** Per particle: its crossing nearest the Earth's passage, as (days after the Earth, P0). */
+    private static Map<Long, double[]> nearest(List<Encounter> enc) {
+        Map<Long, double[]> best = new java.util.TreeMap<>();
+        for (Encounter e : enc) {
+            double[] old = best.get(e.crossing().id());
+            if (old == null || Math.abs(e.daysAfterEarth()) < Math.abs(old[0])) {
+                best.put(e.crossing().id(), new double[] {e.daysAfterEarth(), e.crossing().initialPeriod()});
+            }
+        }
+        return best;
+    }
+
+    private static double[] hits(List<Encounter> enc, double window, int least) {
+        Map<Long, double[]> best = nearest(enc);
+        for (double w = window; w <= MAX_WINDOW; w *= 2) {
+            double lim = w;
+            double[] p = best.values().stream().filter(v -> Math.abs(v[0]) <= lim && Double.isFinite(v[1]))
+                    .mapToDouble(v -> v[1]).toArray();
+            if (p.length >= least) {
+                return p;
+            }
+        }
+        return new double[0];
+    }
+
+    private static double mean(double[] v) {
+        return java.util.Arrays.stream(v).average().orElse(Double.NaN);
+    }
+}

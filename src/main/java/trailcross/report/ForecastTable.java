@@ -1,0 +1,67 @@
+package trailcross.report;
+
+import java.io.PrintWriter;
+import java.util.Locale;
+import trailcross.encounter.AxisMeeting;
+import trailcross.encounter.TrailEncounter;
+import trailcross.forecast.ForecastRun;
+import trailcross.time.Epoch;
+import trailcross.time.EpochFormat;
+
+/**
+ * The forecast's console table, one row per meeting: year, trail (return year), revolutions, the cloud's
+ * peak (UTC) ± its resampling σ, solar longitude, delta r of the cloud and of the axis, fM, FWHM, ZHR ± σ
+ * (or the intensity relative to the strongest meeting when the stream gives no dust production), the
+ * effective sample size, and the axis' peak; a line under a row says where the cloud and the axis disagree
+ * by more than their uncertainties.
+ */
+public final class ForecastTable {
+
+    private ForecastTable() {
+    }
+
+    /**
+     * @param o where to print
+     * @param streamName the stream's name
+     * @param r the forecast
+     */
+    public static void print(PrintWriter o, String streamName, ForecastRun.Result r) {
+        ForecastRun.Settings s = r.settings();
+        String years = s.span() ? s.firstYear() + "-" + s.lastYear() : Integer.toString(s.firstYear());
+        o.printf(Locale.ROOT, "%s in %s: %d meeting(s) with the Earth (%s sampling)%n", streamName, years,
+                r.meetings().size(), s.targeted() ? "targeted" : "plain");
+        o.printf(Locale.ROOT, "%-4s %-5s %3s %-27s %9s %9s %9s %6s %6s %-15s %6s %-17s%n", "year", "trail", "rev",
+                "peak UTC +- sigma", "sol.long", "dr cloud", "dr axis", "fM", "FWHM", r.absolute() ? "ZHR +- sigma"
+                        : "rel. intensity", "ESS", "axis peak UTC");
+        for (ForecastRun.Meeting mt : r.meetings()) {
+            TrailEncounter m = mt.cloud();
+            AxisMeeting.Root a = mt.axis();
+            String peak = m == null ? "(cloud too thin)" : String.format(Locale.ROOT, "%s +- %.0f min",
+                    minute(m.peakT()), m.peakSigmaMin());
+            String intensity = m == null ? "-" : r.absolute() ? String.format(Locale.ROOT, "%.0f +- %.0f", m.zhr(),
+                    m.zhrSigma()) : String.format(Locale.ROOT, "%.3f +- %.3f", mt.relativeIntensity(),
+                    m.zhr() > 0 ? mt.relativeIntensity() * m.zhrSigma() / m.zhr() : 0);
+            o.printf(Locale.ROOT, "%-4d %-5d %3d %-27s %9.4f %9s %9s %6s %6s %-15s %6s %-17s%n", mt.year(),
+                    mt.returnYear(), mt.revolutions(), peak,
+                    m != null ? m.solarLongitudeDeg() : a.solarLongitudeDeg(),
+                    m == null ? "-" : String.format(Locale.ROOT, "%+.5f", m.deltaR()),
+                    a == null ? "-" : String.format(Locale.ROOT, "%+.5f", a.deltaR()),
+                    m == null ? (a == null ? "-" : String.format(Locale.ROOT, "%.3f", a.fM()))
+                            : String.format(Locale.ROOT, "%.3f", m.fM()),
+                    m == null ? "-" : String.format(Locale.ROOT, "%.2fh", m.fwhmHours()), intensity,
+                    m == null ? "-" : String.format(Locale.ROOT, "%.0f", m.ess()),
+                    a == null ? "-" : minute(a.peakT()));
+            if (mt.timesDisagree()) {
+                o.printf(Locale.ROOT, "     cloud and axis peaks differ by %.0f min, more than twice their uncertainty "
+                        + "(cloud %.0f, axis %.1f min)%n", (m.peakT() - a.peakT()) * 1440, m.peakSigmaMin(), a.sigmaMin());
+            }
+        }
+        if (r.meetings().isEmpty()) {
+            o.println("No trail meets the Earth in " + years + " (try more --particles or an earlier --since).");
+        }
+    }
+
+    private static String minute(double t) {
+        return EpochFormat.utc(Epoch.ofDaysSinceJ2000(t + 0.5 / 1440), 0).substring(0, 16).replace("T", " ");
+    }
+}
