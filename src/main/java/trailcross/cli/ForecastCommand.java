@@ -52,7 +52,7 @@ final class ForecastCommand implements Callable<Integer> {
     static final int DEFAULT_SPAN_YEARS = 250;
 
     /** Default particles per return. */
-    static final int DEFAULT_PARTICLES = 6000;
+    static final int DEFAULT_PARTICLES = ForecastRun.DEFAULT_PARTICLES;
 
     @Option(names = "--particles", defaultValue = "" + DEFAULT_PARTICLES, paramLabel = "N",
             description = "particles per return, over all sampling stages (default " + DEFAULT_PARTICLES + ")")

@@ -31,15 +31,20 @@ import org.tomlj.TomlTable;
  * @param year the year (perihelion, forecast)
  * @param since first return examined (forecast)
  * @param particles particles per return (forecast)
- * @param trail the return year of the trail checked (forecast)
+ * @param trail the return year of the trail checked (forecast, calibrate)
+ * @param zhr the observed ZHR the calibration is fitted on (calibrate)
+ * @param transferYear a year the calibrated stream is then forecast for (calibrate; 0: none)
+ * @param transferTrail the trail checked in that year
  * @param checks the checks
  */
 public record ValidationCase(Path file, String name, Path stream, String command, boolean quick, String source,
-        int year, int since, int particles, int trail, List<Check> checks) {
+        int year, int since, int particles, int trail, double zhr, int transferYear, int transferTrail,
+        List<Check> checks) {
 
     /** The quantities a check can name. */
     public static final Set<String> QUANTITIES = Set.of("moid_au", "perihelion_tt", "q_au", "peak_utc",
-            "abs_delta_r_au", "radiant", "solar_longitude_deg");
+            "abs_delta_r_au", "radiant", "solar_longitude_deg", "axis_delta_r_au", "axis_peak_utc", "peak_sigma_min",
+            "calibration_round_trip", "transfer_zhr_factor");
 
     /**
      * One check.
@@ -76,9 +81,9 @@ public record ValidationCase(Path file, String name, Path stream, String command
             throw new IllegalArgumentException(file + ":" + line(t, "stream") + ": stream: no such file " + stream);
         }
         String command = text(file, t, "command");
-        if (!Set.of("moid", "perihelion", "forecast").contains(command)) {
+        if (!Set.of("moid", "perihelion", "forecast", "calibrate").contains(command)) {
             throw new IllegalArgumentException(file + ":" + line(t, "command") + ": command: '" + command
-                    + "' is not moid, perihelion or forecast");
+                    + "' is not moid, perihelion, forecast or calibrate");
         }
         TomlArray arr = t.getArray("check");
         if (arr == null || arr.isEmpty()) {
@@ -99,14 +104,15 @@ public record ValidationCase(Path file, String name, Path stream, String command
                 pub = l.doubleValue();
             }
             Double tol = c.getDouble("tolerance");
-            if (pub == null || (tol == null && !q.equals("abs_delta_r_au"))) {
+            if (pub == null || (tol == null && !q.equals("abs_delta_r_au") && !q.equals("peak_sigma_min"))) {
                 throw new IllegalArgumentException(file + ":" + ln + ": check " + q + " needs published and tolerance");
             }
             checks.add(new Check(q, pub, tol == null ? 0 : tol));
         }
         return new ValidationCase(file, name, stream, command, Boolean.TRUE.equals(t.getBoolean("quick")),
                 text(file, t, "source"), intOf(t, "year"), intOf(t, "since"), intOf(t, "particles"), intOf(t, "trail"),
-                checks);
+                t.getDouble("zhr") == null ? Double.NaN : t.getDouble("zhr"), intOf(t, "transfer_year"),
+                intOf(t, "transfer_trail"), checks);
     }
 
     private static String text(Path file, TomlParseResult t, String key) {

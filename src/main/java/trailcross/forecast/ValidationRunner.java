@@ -68,26 +68,82 @@ public final class ValidationRunner {
                     }
                 }
             }
-            default -> {
-                ForecastRun.Result r = ForecastRun.run(d, ephemeris, new ForecastRun.Settings(c.year(), c.since(), 0, false,
-                        c.particles(), 1L, Runtime.getRuntime().availableProcessors()), log);
-                TrailEncounter m = r.trails().stream().filter(t -> t.returnYear() == c.trail() && t.meeting() != null)
-                        .map(ForecastRun.Trail::meeting).findFirst().orElseThrow(() -> new IllegalStateException(
-                                "the " + c.trail() + " trail has too few particles near the Earth"));
+            case "calibrate" -> {
+                ForecastRun.Settings st = settings(c, c.year());
+                Calibration cal = Calibration.fit(d, ephemeris, st, c.trail(), c.zhr(), log);
                 for (ValidationCase.Check k : c.checks()) {
+                    if (k.quantity().equals("calibration_round_trip")) {
+                        // The calibrated file written, read back, and forecast again: the trail's ZHR is the observed.
+                        java.nio.file.Path tmp;
+                        try {
+                            tmp = java.nio.file.Files.createTempFile("trailcross-calibrated", ".toml");
+                            java.nio.file.Files.writeString(tmp, Calibration.withDustProduction(
+                                    java.nio.file.Files.readString(c.stream()), cal.dustKgS()));
+                        } catch (java.io.IOException e) {
+                            throw new java.io.UncheckedIOException(e);
+                        }
+                        StreamDefinition again = StreamFileReader.read(tmp);
+                        ForecastRun.Result r2 = ForecastRun.run(again, ephemeris, st, log);
+                        double z = r2.meetings().stream().filter(m -> m.returnYear() == c.trail() && m.cloud() != null)
+                                .findFirst().orElseThrow().cloud().zhr();
+                        double rel = z / c.zhr() - 1;
+                        out.add(new Outcome(k.quantity(), String.format(Locale.ROOT, "ZHR %.1f with %.4g kg/s", z,
+                                cal.dustKgS()), String.format(Locale.ROOT, "%.0f", c.zhr()),
+                                String.format(Locale.ROOT, "%+.1e", rel), Math.abs(rel) <= k.tolerance()));
+                    } else if (k.quantity().equals("transfer_zhr_factor")) {
+                        StreamDefinition cd = ForecastRun.withDust(d, cal.dustKgS());
+                        ForecastRun.Result r2 = ForecastRun.run(cd, ephemeris, settings(c, c.transferYear()), log);
+                        ForecastRun.Meeting m = r2.meetings().stream().filter(x -> x.returnYear() == c.transferTrail()
+                                && x.cloud() != null).findFirst().orElse(null);
+                        double pub = (Double) k.published();
+                        double z = m == null ? 0 : m.cloud().zhr();
+                        double factor = z / pub;
+                        out.add(new Outcome(k.quantity(), String.format(Locale.ROOT, "%d trail in %d: ZHR %.0f +- %.0f",
+                                c.transferTrail(), c.transferYear(), z, m == null ? 0 : m.cloud().zhrSigma()),
+                                String.format(Locale.ROOT, "ZHR %.0f", pub), String.format(Locale.ROOT, "x %.2f", factor),
+                                factor > 0 && Math.max(factor, 1 / factor) <= k.tolerance()));
+                    } else {
+                        throw new IllegalArgumentException(c.file() + ": " + k.quantity() + " is not a calibrate quantity");
+                    }
+                }
+            }
+            default -> {
+                ForecastRun.Result r = ForecastRun.run(d, ephemeris, settings(c, c.year()), log);
+                ForecastRun.Meeting mt = r.meetings().stream().filter(t -> t.returnYear() == c.trail()).findFirst()
+                        .orElseThrow(() -> new IllegalStateException("the " + c.trail() + " trail does not meet the Earth"));
+                TrailEncounter m = mt.cloud();
+                for (ValidationCase.Check k : c.checks()) {
+                    if (m == null && !k.quantity().startsWith("axis_")) {
+                        out.add(new Outcome(k.quantity(), "(cloud too thin)", String.valueOf(k.published()), "", false));
+                        continue;
+                    }
+                    if (mt.axis() == null && k.quantity().startsWith("axis_")) {
+                        out.add(new Outcome(k.quantity(), "(the axis does not meet the Earth)", String.valueOf(k.published()),
+                                "", false));
+                        continue;
+                    }
                     out.add(switch (k.quantity()) {
-                        case "peak_utc" -> {
+                        case "peak_utc", "axis_peak_utc" -> {
+                            boolean axis = k.quantity().startsWith("axis");
+                            double t = axis ? mt.axis().peakT() : m.peakT();
+                            double sigma = axis ? mt.axis().sigmaMin() : m.peakSigmaMin();
                             double pub = EpochParser.parse((String) k.published()).daysSinceJ2000();
-                            double min = (m.peakT() - pub) * 1440;
-                            yield new Outcome(k.quantity(), EpochFormat.utc(Epoch.ofDaysSinceJ2000(m.peakT()), 0)
-                                    + String.format(Locale.ROOT, " ± %.0f min", m.peakSigmaMin()), (String) k.published(),
+                            double min = (t - pub) * 1440;
+                            yield new Outcome(k.quantity(), EpochFormat.utc(Epoch.ofDaysSinceJ2000(t), 0)
+                                    + String.format(Locale.ROOT, " ± %.1f min", sigma), (String) k.published(),
                                     String.format(Locale.ROOT, "%+.0f min", min), Math.abs(min) <= k.tolerance());
+                        }
+                        case "peak_sigma_min" -> {
+                            double bound = (Double) k.published();
+                            yield new Outcome(k.quantity(), String.format(Locale.ROOT, "%.1f min", m.peakSigmaMin()),
+                                    String.format(Locale.ROOT, "<= %.1f min", bound), "", m.peakSigmaMin() <= bound);
                         }
                         case "abs_delta_r_au" -> {
                             double bound = (Double) k.published();
                             yield new Outcome(k.quantity(), String.format(Locale.ROOT, "%+.5f au", m.deltaR()),
                                     String.format(Locale.ROOT, "< %.4f au", bound), "", Math.abs(m.deltaR()) < bound);
                         }
+                        case "axis_delta_r_au" -> number(k, mt.axis().deltaR(), "%+.5f", "au");
                         case "radiant" -> {
                             double[] rd = (double[]) k.published();
                             double sep = Math.toDegrees(Angles.separation(Math.toRadians(m.raDeg()),
@@ -104,6 +160,17 @@ public final class ValidationRunner {
             }
         }
         return out;
+    }
+
+    /**
+     * A case's forecast settings: its since year (or, when 0, the forecast's default screened returns) and its
+     * particles (0: the forecast's default).
+     */
+    private static ForecastRun.Settings settings(ValidationCase c, int year) {
+        int particles = c.particles() > 0 ? c.particles() : ForecastRun.DEFAULT_PARTICLES;
+        boolean screen = c.since() == 0;
+        return new ForecastRun.Settings(year, year, screen ? Math.max(1001, year - 250) : c.since(), screen ? 4 : 0, screen,
+                particles, 1L, Runtime.getRuntime().availableProcessors(), true);
     }
 
     private static Outcome number(ValidationCase.Check k, double computed, String format, String unit) {

@@ -20,11 +20,12 @@ class ForecastCommandTest {
         MainTest.Run r = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2027", "--returns", "1",
                 "--particles", "400", "--out", dir.toString());
         assertThat(r.code()).as(r.err()).isZero();
-        assertThat(r.out()).contains("1 returns since").contains("trail(s) meet the Earth")
-                .contains("operational decisions rest with");
+        assertThat(r.out()).contains("1 returns since").contains("meeting(s) with the Earth (targeted sampling)")
+                .contains("ESS").contains("axis peak UTC").contains("operational decisions rest with");
         List<String> enc = Files.readAllLines(dir.resolve("encounters.csv"));
-        assertThat(enc.get(0)).isEqualTo("return_year,revolutions,peak_utc,solar_longitude_deg,delta_r_au,particles,"
-                + "ra_deg,dec_deg,vg_km_s,fwhm_h,zhr");
+        // The contract's columns (../shared/DESIGN.md), then the new ones it names, then ours.
+        assertThat(enc.get(0)).startsWith("return_year,revolutions,peak_utc,solar_longitude_deg,delta_r_au,particles,"
+                + "ra_deg,dec_deg,vg_km_s,fwhm_h,zhr,peak_sigma_min,axis_peak_utc,axis_delta_r_au,fm,ess,zhr_sigma,");
         assertThat(enc).hasSize(2);
         String[] row = enc.get(1).split(",", -1);
         assertThat(row[0]).isEqualTo("1993");
@@ -34,15 +35,60 @@ class ForecastCommandTest {
         assertThat(row[2]).startsWith("2027-06-");
         assertThat(Double.parseDouble(row[3])).isBetween(73.0, 77.0);
         assertThat(Math.abs(Double.parseDouble(row[4]))).isLessThan(0.01);
-        assertThat(row[10]).isNotEmpty();
+        assertThat(Double.parseDouble(row[10])).isPositive();
+        assertThat(Double.parseDouble(row[11])).isPositive();
+        assertThat(row[12]).startsWith("2027-06-");
+        assertThat(Double.parseDouble(row[15])).isGreaterThan(1);
+        assertThat(Double.parseDouble(row[16])).isPositive();
         assertThat(Files.readAllLines(dir.resolve("crossings.csv")).size()).isGreaterThan(10);
         assertThat(Files.readString(dir.resolve("radiants.csv"))).startsWith("date_utc,solar_longitude_deg,ra_deg,dec_deg,vg_km_s\n2027-");
-        assertThat(Files.readString(dir.resolve("summary.json"))).contains("\"seed\": 1").contains("\"caution\"");
+        assertThat(Files.readString(dir.resolve("summary.json"))).contains("\"seed\": 1").contains("\"caution\"")
+                .contains("\"ess\": ").contains("\"run_seconds\": ");
         for (String png : new String[] {"node-map.png", "activity.png", "radiants.png"}) {
             byte[] b = Files.readAllBytes(dir.resolve(png));
             assertThat(b.length).as(png).isGreaterThan(5000);
             assertThat(new String(b, 1, 3, java.nio.charset.StandardCharsets.US_ASCII)).isEqualTo("PNG");
         }
+    }
+
+    @Test
+    void aSpanOfYearsGivesOneTableWithAYearColumn() throws IOException {
+        MainTest.Run r = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2026..2027", "--returns", "1",
+                "--particles", "300", "--out", dir.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        List<String> enc = Files.readAllLines(dir.resolve("encounters.csv"));
+        assertThat(enc.get(0)).startsWith("year,return_year,revolutions,peak_utc,");
+        // Every meeting's peak lies inside its own year.
+        for (String line : enc.subList(1, enc.size())) {
+            String[] row = line.split(",", -1);
+            assertThat(row[3]).startsWith(row[0] + "-");
+        }
+        assertThat(enc.stream().anyMatch(l -> l.startsWith("2027,1993,"))).isTrue();
+    }
+
+    @Test
+    void calibrateWritesTheFittedDustProduction() throws IOException {
+        Path cal = dir.resolve("calibrated.toml");
+        MainTest.Run r = MainTest.run("calibrate", "streams/lysandre.toml", "--year", "2027", "--trail", "1993", "--zhr",
+                "250", "--returns", "1", "--particles", "300", "--out", cal.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("dust_production_kg_s = ([0-9.e+-]+)").matcher(r.out());
+        assertThat(m.find()).isTrue();
+        double x = Double.parseDouble(m.group(1));
+        assertThat(x).isPositive();
+        String text = Files.readString(cal);
+        assertThat(text).contains("dust_production_kg_s = " + m.group(1)).contains("[parent]").contains("q_au = 0.95");
+        assertThat(text.split("dust_production_kg_s", -1)).hasSize(2);
+        // The same run with the calibrated file gives the observed ZHR (the ZHR scales with the production).
+        MainTest.Run f = MainTest.run("forecast", cal.toString(), "--year", "2027", "--returns", "1", "--particles", "300",
+                "--out", dir.resolve("f").toString());
+        assertThat(f.code()).as(f.err()).isZero();
+        String[] row = Files.readAllLines(dir.resolve("f").resolve("encounters.csv")).get(1).split(",", -1);
+        assertThat(Double.parseDouble(row[10])).isCloseTo(250.0, org.assertj.core.api.Assertions.within(1.0));
+        MainTest.Run bad = MainTest.run("calibrate", "streams/lysandre.toml", "--year", "2027", "--trail", "1800",
+                "--zhr", "250", "--returns", "1", "--particles", "300");
+        assertThat(bad.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(bad.err()).contains("--trail 1800");
     }
 
     @Test
@@ -56,6 +102,12 @@ class ForecastCommandTest {
         MainTest.Run c = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2027", "--since", "1990", "--returns", "2");
         assertThat(c.code()).isEqualTo(Main.BAD_INPUT);
         assertThat(c.err()).contains("--since or --returns, not both");
+        MainTest.Run d = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2028..2027");
+        assertThat(d.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(d.err()).contains("the span is reversed");
+        MainTest.Run e = MainTest.run("forecast", "streams/lysandre.toml", "--year", "20x7");
+        assertThat(e.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(e.err()).contains("--year: '20x7'");
     }
 
     @Test
@@ -76,7 +128,7 @@ class ForecastCommandTest {
         resume[args.length] = "--resume";
         MainTest.Run again = MainTest.run(resume);
         assertThat(again.code()).as(again.err()).isZero();
-        assertThat(again.out()).contains("read back from the saved run").contains("propagated");
+        assertThat(again.out()).contains("read back from the saved run").contains("targeted");
         assertThat(Files.readString(dir.resolve("encounters.csv"))).isEqualTo(encounters);
         assertThat(Files.readString(dir.resolve("crossings.csv"))).isEqualTo(crossings);
         // Other settings do not mix with the saved run.
