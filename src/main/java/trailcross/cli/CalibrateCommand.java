@@ -16,7 +16,7 @@ import trailcross.ephemeris.Ephemeris;
 import trailcross.ephemeris.Ephemerides;
 import trailcross.forecast.Calibration;
 import trailcross.forecast.ForecastRun;
-import trailcross.report.AtomicFile;
+import trailcross.io.AtomicFile;
 import trailcross.stream.StreamDefinition;
 import trailcross.stream.StreamFileReader;
 
@@ -88,7 +88,7 @@ final class CalibrateCommand implements Callable<Integer> {
         });
         o.printf(Locale.ROOT, "trail %d in %d: computed ZHR %.4g +- %.2g at %.4g kg/s; observed %.4g%n", trail, year,
                 c.computedZhr(), c.computedSigma(), c.runDustKgS(), zhr);
-        o.printf(Locale.ROOT, "dust_production_kg_s = %.6g%n", c.dustKgS());
+        o.printf(Locale.ROOT, "dust_production_kg_s = %.9g%n", c.dustKgS());
         o.printf(Locale.ROOT, "(statistical uncertainty %.2g kg/s, %.0f%%)%n", c.sigmaKgS(), 100 * c.sigmaKgS() / c.dustKgS());
         if (out != null) {
             String text;

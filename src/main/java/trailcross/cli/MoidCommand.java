@@ -64,14 +64,10 @@ final class MoidCommand implements Callable<Integer> {
         o.println("local minima: distance_au, true_anomaly_a_deg, r_a_au, true_anomaly_b_deg, r_b_au");
         for (Moid.Minimum m : minima) {
             o.printf(Locale.ROOT, "  %.8f  %9.4f  %.6f  %9.4f  %.6f%n", m.distance(), Math.toDegrees(m.trueAnomalyA()),
-                    norm(m.pointA()), Math.toDegrees(m.trueAnomalyB()), norm(m.pointB()));
+                    m.radiusA(), Math.toDegrees(m.trueAnomalyB()), m.radiusB());
         }
         o.printf(Locale.ROOT, "D_SH %.5f  D' %.5f  D_H %.5f%n", DCriteria.southworthHawkins(ea, eb),
                 DCriteria.drummond(ea, eb), DCriteria.jopek(ea, eb));
         return 0;
-    }
-
-    private static double norm(double[] v) {
-        return Math.sqrt(v[0] * v[0] + v[1] * v[1] + v[2] * v[2]);
     }
 }

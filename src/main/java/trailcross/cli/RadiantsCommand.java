@@ -27,7 +27,7 @@ import trailcross.forecast.ParentReturns;
 import trailcross.forecast.TrailPropagation;
 import trailcross.orbit.Elements;
 import trailcross.orbit.Moid;
-import trailcross.report.AtomicFile;
+import trailcross.io.AtomicFile;
 import trailcross.stream.StreamDefinition;
 import trailcross.stream.StreamFileReader;
 import trailcross.time.Epoch;

@@ -17,12 +17,12 @@ import picocli.CommandLine.Parameters;
 import trailcross.dynamics.Perihelion;
 import trailcross.encounter.EarthOrbit;
 import trailcross.encounter.GeocentricRadiant;
-import trailcross.encounter.Reachability;
+import trailcross.forecast.Reachability;
 import trailcross.encounter.TheoreticalRadiant;
 import trailcross.ephemeris.Ephemeris;
 import trailcross.ephemeris.Ephemerides;
 import trailcross.forecast.ParentReturns;
-import trailcross.report.AtomicFile;
+import trailcross.io.AtomicFile;
 import trailcross.stream.StreamDefinition;
 import trailcross.stream.StreamFileReader;
 import trailcross.time.Epoch;
@@ -96,7 +96,7 @@ final class ReachCommand implements Callable<Integer> {
             for (Reachability.Branch b : r.branches()) {
                 GeocentricRadiant g = b.radiant().radiant();
                 String node = b.radiant().ascending() ? "ascending" : "descending";
-                String dv = Double.isNaN(b.leastEjectionMs()) ? "> " + (int) trailcross.encounter.EjectionReach.MAX_SPEED_M_S
+                String dv = Double.isNaN(b.leastEjectionMs()) ? "> " + (int) trailcross.forecast.EjectionReach.MAX_SPEED_M_S
                         : String.format(Locale.ROOT, "%.1f", b.leastEjectionMs());
                 o.printf(Locale.ROOT, "%-20s %-7s %10.6f %-10s %9.4f %8.3f %8.2f %+8.2f %7.2f %10s%n", "", "",
                         b.radiant().minimum().distance(), node, b.radiant().nodeDistanceAu(), g.solarLongitudeDeg(),

@@ -42,7 +42,7 @@ public final class Checkpoint {
      * @param entries the particles
      */
     public static void write(Path file, List<Entry> entries) {
-        trailcross.report.AtomicFile.write(file, w -> {
+        trailcross.io.AtomicFile.write(file, w -> {
             try (CSVPrinter csv = new CSVPrinter(w,
                     CSVFormat.DEFAULT.builder().setHeader(HEADER).setRecordSeparator('\n').build())) {
                 for (Entry e : entries) {
@@ -95,10 +95,10 @@ public final class Checkpoint {
     }
 
     private static double finite(String text, String column) {
-        return trailcross.report.CsvNumbers.finite(text, column);
+        return trailcross.io.CsvNumbers.finite(text, column);
     }
 
     private static String num(double v) {
-        return trailcross.report.CsvNumbers.exact(v);
+        return trailcross.io.CsvNumbers.exact(v);
     }
 }

@@ -12,7 +12,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
-import trailcross.report.AtomicFile;
+import trailcross.io.AtomicFile;
 
 /**
  * A meteoroid cloud as CSV (Commons CSV), so that a researcher can inspect or replace it: columns
@@ -104,7 +104,7 @@ public final class MeteoroidFile {
     }
 
     private static double finite(CSVRecord rec, String column) {
-        return trailcross.report.CsvNumbers.finite(rec.get(column), column);
+        return trailcross.io.CsvNumbers.finite(rec.get(column), column);
     }
 
     private static double positive(CSVRecord rec, String column) {
@@ -124,6 +124,6 @@ public final class MeteoroidFile {
     }
 
     private static String num(double v) {
-        return trailcross.report.CsvNumbers.exact(v);
+        return trailcross.io.CsvNumbers.exact(v);
     }
 }

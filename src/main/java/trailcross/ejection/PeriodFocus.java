@@ -61,43 +61,23 @@ public record PeriodFocus(double lo, double step, double[] values, double floor)
     }
 
     /**
-     * A focus learned from periods that reached the target: a weighted Gaussian kernel density of them
-     * (bandwidth Silverman's rule of thumb, 0.9 min(σ, IQR/1.34) n^−1/5 with n the Kish effective number
-     * (Silverman 1986, eq. 3.31), times {@code widen}, and never below {@code minBandwidth}), scaled so that
-     * its maximum is 1, then lifted to the floor: a = floor + (1 − floor) f / max f.
+     * A focus learned from periods that reached the target: a weighted Gaussian kernel density of them with the
+     * bandwidth given (the caller's choice, e.g. Silverman's rule of thumb), scaled so that its maximum is 1,
+     * then lifted to the floor: a = floor + (1 − floor) f / max f.
      *
      * @param periods the periods of the particles that reached the target, days
      * @param weights their importance weights (relative)
-     * @param widen factor on the rule-of-thumb bandwidth (greater than 1 explores more widely)
-     * @param minBandwidth the least bandwidth, days
+     * @param h the kernel's bandwidth, days (&gt; 0)
      * @param floor the defensive acceptance off the focus
      * @return the focus
      */
-    public static PeriodFocus learn(double[] periods, double[] weights, double widen, double minBandwidth, double floor) {
+    public static PeriodFocus learn(double[] periods, double[] weights, double h, double floor) {
         int n = periods.length;
-        if (n == 0 || weights.length != n) {
-            throw new IllegalArgumentException("a focus needs at least one period, with one weight each");
+        if (n == 0 || weights.length != n || !(h > 0)) {
+            throw new IllegalArgumentException("a focus needs at least one period, with one weight each, and a bandwidth > 0");
         }
-        double sw = 0;
-        double sw2 = 0;
-        double mean = 0;
-        for (int k = 0; k < n; k++) {
-            sw += weights[k];
-            sw2 += weights[k] * weights[k];
-            mean += weights[k] * periods[k];
-        }
-        mean /= sw;
-        double var = 0;
-        for (int k = 0; k < n; k++) {
-            var += weights[k] * (periods[k] - mean) * (periods[k] - mean);
-        }
-        double sigma = Math.sqrt(var / sw);
         double[] sorted = periods.clone();
         Arrays.sort(sorted);
-        double iqr = quantile(sorted, 0.75) - quantile(sorted, 0.25);
-        double spread = iqr > 0 ? Math.min(sigma, iqr / 1.34) : sigma;
-        double ess = sw * sw / sw2;
-        double h = Math.max(minBandwidth, widen * 0.9 * spread * Math.pow(Math.max(ess, 1), -0.2));
         double lo = sorted[0] - 4 * h;
         double hi = sorted[n - 1] + 4 * h;
         double step = (hi - lo) / (GRID - 1);
@@ -136,13 +116,6 @@ public record PeriodFocus(double lo, double step, double[] values, double floor)
             a[j] = Math.min(1, floor + (1 - floor) * Math.exp(-0.5 * z * z));
         }
         return new PeriodFocus(lo, step, a, floor);
-    }
-
-    private static double quantile(double[] sorted, double q) {
-        double x = q * (sorted.length - 1);
-        int k = (int) Math.floor(x);
-        int k1 = Math.min(k + 1, sorted.length - 1);
-        return sorted[k] + (x - k) * (sorted[k1] - sorted[k]);
     }
 
     @Override

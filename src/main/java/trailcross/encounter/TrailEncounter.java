@@ -27,8 +27,8 @@ import trailcross.frames.Angles;
  * <li>delta r: the weighted median of the crossings at the peak longitude (weights × the longitude kernel);
  * the radiant and Vg: their weighted mean;</li>
  * <li>fM (McNaught &amp; Asher 1999): 1/|d t_node / d P0|, with t_node the node passage times and P0 the
- * orbital periods at ejection (least-squares slope; an unperturbed trail N revolutions old has
- * d t_node / d P0 = N);</li>
+ * orbital periods at ejection (least-squares slope over the crossings of the commonest revolution count;
+ * an unperturbed trail N revolutions old has d t_node / d P0 = N);</li>
  * <li>ESS: Kish's effective number of the crossings behind the profile.</li>
  * </ul>
  *
@@ -164,10 +164,22 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
         double decDeg = Math.toDegrees(Math.atan2(sz, Math.hypot(sx, sy)));
         // fM: node passage time against the period at ejection; an unperturbed trail N revolutions old has
         // dt/dP0 = N, so fM = 1/|dt/dP0| relative to one revolution.
+        // Only the crossings of the section's commonest number of revolutions since the return: where planets
+        // make the map many-valued, particles of another revolution count are not on the same branch.
+        java.util.Map<Long, Integer> revs = new java.util.TreeMap<>();
+        for (Encounter e : met) {
+            double p0 = e.crossing().initialPeriod();
+            if (Double.isFinite(p0)) {
+                revs.merge(Math.round((e.crossing().t() - e.crossing().returnT()) / p0), 1, Integer::sum);
+            }
+        }
+        long branch = revs.entrySet().stream().max(java.util.Map.Entry.comparingByValue()).map(java.util.Map.Entry::getKey)
+                .orElse(0L);
         SimpleRegression tp = new SimpleRegression();
         for (Encounter e : met) {
-            if (Double.isFinite(e.crossing().initialPeriod())) {
-                tp.addData(e.crossing().initialPeriod(), e.crossing().t());
+            double p0 = e.crossing().initialPeriod();
+            if (Double.isFinite(p0) && Math.round((e.crossing().t() - e.crossing().returnT()) / p0) == branch) {
+                tp.addData(p0, e.crossing().t());
             }
         }
         double fM = 1 / Math.abs(tp.getSlope());

@@ -77,7 +77,7 @@ public record Calibration(double dustKgS, double sigmaKgS, double runDustKgS, do
         String section = "";
         int header = -1;
         boolean done = false;
-        String value = String.format(Locale.ROOT, "dust_production_kg_s = %.6g", kgS);
+        String value = String.format(Locale.ROOT, "dust_production_kg_s = %.9g", kgS);
         for (int k = 0; k < lines.length; k++) {
             Matcher sm = SECTION.matcher(lines[k]);
             if (sm.matches()) {

@@ -77,6 +77,55 @@ public final class ForecastBenchmark {
         return new Figure(workload, threads, n, py / cpu, wall, peak / 1048576.0);
     }
 
+    /**
+     * The precision of the forecast's figure that matters against the work it costs: the 1999 Leonids from
+     * 55P's returns since 1898, the 1899 trail's peak σ (resampling, minutes) and the process CPU time, for one
+     * sampling. Since σ falls as 1/√(particles), σ² × CPU-minutes is a figure independent of the particle
+     * count; its ratio between plain and targeted sampling is the gain in efficiency.
+     *
+     * @param particles particles per return
+     * @param targeted the sampling
+     * @param threads threads
+     * @param ephemeris the planets
+     * @return sampling, σ (min), CPU minutes, crossings in the trail's section, ESS
+     */
+    public static Precision precision(int particles, boolean targeted, int threads, Ephemeris ephemeris) {
+        StreamDefinition d = StreamFileReader.read(Path.of("validation/55p-tempel-tuttle.toml"));
+        ForecastRun.Settings s = new ForecastRun.Settings(1999, 1999, 1898, 0, false, particles, 1, threads, targeted);
+        long cpu0 = cpuNanos();
+        ForecastRun.Result r = ForecastRun.run(d, ephemeris, s, line -> { });
+        double cpu = (cpuNanos() - cpu0) / 60e9;
+        ForecastRun.Meeting m = r.meetings().stream().filter(x -> x.returnYear() == 1899 && x.cloud() != null)
+                .findFirst().orElse(null);
+        return new Precision(targeted ? "targeted" : "plain", particles, m == null ? Double.NaN : m.cloud().peakSigmaMin(),
+                cpu, m == null ? 0 : m.cloud().particles(), m == null ? 0 : m.cloud().ess());
+    }
+
+    /**
+     * One precision figure.
+     *
+     * @param sampling plain or targeted
+     * @param particles particles per return
+     * @param sigmaMin the 1899 trail's peak σ, minutes (NaN when the trail is not met)
+     * @param cpuMinutes the process CPU time
+     * @param section crossings in the trail's section
+     * @param ess their effective number
+     */
+    public record Precision(String sampling, int particles, double sigmaMin, double cpuMinutes, int section, double ess) {
+
+        /** @return σ² × CPU-minutes (min² CPU-min; lower is better) */
+        public double varianceTime() {
+            return sigmaMin * sigmaMin * cpuMinutes;
+        }
+
+        /** @return the machine-readable line */
+        public String line() {
+            return String.format(Locale.ROOT, "bench forecast precision-%s threads=2 particles=%d peak_sigma_min=%.2f "
+                    + "cpu_min=%.2f sigma2_cpu=%.1f section=%d ess=%.0f", sampling, particles, sigmaMin, cpuMinutes,
+                    varianceTime(), section, ess);
+        }
+    }
+
     private static long cpuNanos() {
         if (ManagementFactory.getOperatingSystemMXBean() instanceof com.sun.management.OperatingSystemMXBean os) {
             return os.getProcessCpuTime();

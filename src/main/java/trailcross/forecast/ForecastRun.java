@@ -6,10 +6,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.Consumer;
 import trailcross.dynamics.Perihelion;
-import trailcross.ejection.ImportanceWeights;
-import trailcross.ejection.Meteoroid;
-import trailcross.ejection.ParticleGenerator;
-import trailcross.ejection.PeriodFocus;
 import trailcross.encounter.AxisMeeting;
 import trailcross.encounter.Encounter;
 import trailcross.encounter.NodeCrossing;
@@ -207,8 +203,12 @@ public final class ForecastRun {
         double spanEnd = years[years.length - 1];
         double windowStart = spanStart - EDGE_DAYS;
         double windowEnd = spanEnd + EDGE_DAYS;
-        ephemeris.checkSpan(windowStart);
-        ephemeris.checkSpan(windowEnd);
+        if (!(windowStart >= ephemeris.firstDay() && windowEnd <= ephemeris.lastDay())) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "--year %s lies outside the span of the ephemeris %s (years %d..%d)",
+                    s.span() ? s.firstYear() + ".." + s.lastYear() : Integer.toString(s.firstYear()), ephemeris.name(),
+                    ParentReturns.yearOf(ephemeris.firstDay()) + 1, ParentReturns.yearOf(ephemeris.lastDay()) - 1));
+        }
         ParentReturns.Result returns = ParentReturns.compute(run.parent(), ephemeris, s.sinceYear(), s.firstYear());
         List<Perihelion> chosen = new ArrayList<>(returns.returns().stream().filter(p -> p.t() < spanStart - 30)
                 .filter(p -> !s.screen() || trailcross.orbit.Moid.of(p.elements(),

@@ -50,8 +50,13 @@ public final class ParentReturns {
      * @return Jan 1.0 TDB of that year, days since J2000
      */
     public static double yearStart(int year) {
-        return trailcross.time.EpochParser.parse(String.format(java.util.Locale.ROOT,
-                "%04d-01-01T00:00:00 TDB", year)).daysSinceJ2000();
+        // Gregorian calendar (proleptic), January 1.0 as month 13 of the year before (Meeus 1998, ch. 7):
+        // computed from the calendar, so that any year gives a number and the ephemeris' span check can speak.
+        long y = year - 1L;
+        long a = Math.floorDiv(y, 100);
+        long b = 2 - a + Math.floorDiv(a, 4);
+        double jd = Math.floor(365.25 * (y + 4716)) + Math.floor(30.6001 * 14) + 1 + b - 1524.5;
+        return jd - 2451545.0;
     }
 
     /**
@@ -66,7 +71,13 @@ public final class ParentReturns {
      * @return the calendar year (TDB) containing t
      */
     public static int yearOf(double t) {
-        return Integer.parseInt(trailcross.time.EpochFormat.iso(trailcross.time.Epoch.ofDaysSinceJ2000(t),
-                trailcross.time.TimeScale.TDB, 0).substring(0, 4));
+        int y = (int) Math.floor(2000 + t / 365.2425);
+        while (yearStart(y) > t) {
+            y--;
+        }
+        while (yearStart(y + 1) <= t) {
+            y++;
+        }
+        return y;
     }
 }

@@ -54,8 +54,9 @@ public final class TargetedEjection {
     public record Cloud(List<NodeCrossing> crossings, ImportanceWeights weights, double[] hitPeriods, String description) {
 
         /**
-         * The period offsets the trail's axis should span: those of the particles that came near the Earth,
-         * widened by half their range on each side (at least 2 days), else those of every crossing.
+         * The period offsets the trail's axis should span: the central 90% of those of the particles that came
+         * near the Earth (a rare particle many revolutions off does not stretch the family), widened by half
+         * their range on each side (at least 2 days), else those of every crossing.
          *
          * @param parentPeriod the parent's period at the return, days
          * @return least and greatest offset, days
@@ -66,8 +67,10 @@ public final class TargetedEjection {
             if (p.length < 2) {
                 return new double[] {-0.02 * parentPeriod, 0.02 * parentPeriod};
             }
-            double lo = java.util.Arrays.stream(p).min().orElseThrow() - parentPeriod;
-            double hi = java.util.Arrays.stream(p).max().orElseThrow() - parentPeriod;
+            double[] sorted = p.clone();
+            java.util.Arrays.sort(sorted);
+            double lo = sorted[(int) Math.floor(0.05 * (sorted.length - 1))] - parentPeriod;
+            double hi = sorted[(int) Math.ceil(0.95 * (sorted.length - 1))] - parentPeriod;
             double pad = Math.max(2, 0.5 * (hi - lo));
             return new double[] {lo - pad, hi + pad};
         }
@@ -217,8 +220,10 @@ public final class TargetedEjection {
         if (hits.size() >= 3) {
             double[] p = hits.stream().mapToDouble(h -> h[0]).toArray();
             double[] w = hits.stream().mapToDouble(h -> h[1]).toArray();
-            shape = PeriodFocus.learn(p, w, WIDEN[k], 0.01, 1e-9);
-            return withFloor(shape, prior, f -> PeriodFocus.learn(p, w, WIDEN[k], 0.01, f));
+            // Silverman's rule of thumb (DensityProfile.bandwidth), widened to explore, at least 0.01 d.
+            double h = Math.max(0.01, WIDEN[k] * trailcross.encounter.DensityProfile.bandwidth(p, w));
+            shape = PeriodFocus.learn(p, w, h, 1e-9);
+            return withFloor(shape, prior, f -> PeriodFocus.learn(p, w, h, f));
         }
         // Nobody near yet: aim where the pilot's node times extrapolate to the Earth's passage.
         SimpleRegression fit = new SimpleRegression();

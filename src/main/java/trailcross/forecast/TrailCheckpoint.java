@@ -12,7 +12,7 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
 import trailcross.encounter.NodeCrossing;
-import trailcross.report.AtomicFile;
+import trailcross.io.AtomicFile;
 
 /**
  * A forecast's progress on disk, so that {@code --resume} continues a run after a crash with identical
@@ -134,6 +134,6 @@ public final class TrailCheckpoint {
     }
 
     private static String n(double v) {
-        return trailcross.report.CsvNumbers.exact(v);
+        return trailcross.io.CsvNumbers.exact(v);
     }
 }

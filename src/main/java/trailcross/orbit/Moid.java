@@ -33,6 +33,16 @@ public final class Moid {
      */
     public record Minimum(double distance, double trueAnomalyA, double trueAnomalyB, double[] pointA,
             double[] pointB) {
+
+        /** @return the heliocentric distance of the point on orbit A, au */
+        public double radiusA() {
+            return Math.sqrt(pointA[0] * pointA[0] + pointA[1] * pointA[1] + pointA[2] * pointA[2]);
+        }
+
+        /** @return the heliocentric distance of the point on orbit B, au */
+        public double radiusB() {
+            return Math.sqrt(pointB[0] * pointB[0] + pointB[1] * pointB[1] + pointB[2] * pointB[2]);
+        }
     }
 
     private Moid() {

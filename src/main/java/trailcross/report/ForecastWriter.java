@@ -1,5 +1,6 @@
 package trailcross.report;
 
+import trailcross.io.AtomicFile;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;

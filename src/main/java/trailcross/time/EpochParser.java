@@ -98,8 +98,62 @@ public final class EpochParser {
         throw new IllegalArgumentException("time '" + text + "': unknown month '" + name + "'");
     }
 
+    /** The leap seconds inserted at the end of a UTC day (IAU SOFA iauDat's table), 0 on most days. */
+    private static double leapAtEndOf(int year, int month, int day) {
+        int ny = year;
+        int nm = month;
+        int nd = day + 1;
+        if (nd > monthLength(year, month)) {
+            nd = 1;
+            nm++;
+            if (nm > 12) {
+                nm = 1;
+                ny++;
+            }
+        }
+        try {
+            return JSOFA.jauDat(ny, nm, nd, 0.0) - JSOFA.jauDat(year, month, day, 0.0);
+        } catch (JSOFAIllegalParameter | JSOFAInternalError e) {
+            return 0;
+        }
+    }
+
+    /**
+     * @param year a Gregorian year (proleptic)
+     * @param month 1..12
+     * @return the days in that month
+     */
+    static int monthLength(int year, int month) {
+        return switch (month) {
+            case 2 -> (year % 4 == 0 && year % 100 != 0) || year % 400 == 0 ? 29 : 28;
+            case 4, 6, 9, 11 -> 30;
+            default -> 31;
+        };
+    }
+
     private static Epoch fromCalendar(TimeScale scale, int year, int month, int day, int hour, int minute,
             double second, String text) {
+        if (month < 1 || month > 12) {
+            throw new IllegalArgumentException("time '" + text + "': not a valid date: month " + month + " is not 1..12");
+        }
+        int length = monthLength(year, month);
+        if (day < 1 || day > length) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "time '%s': not a valid date: day %d is not in %d-%02d (1..%d)",
+                    text, day, year, month, length));
+        }
+        if (hour > 23 || minute > 59) {
+            throw new IllegalArgumentException("time '" + text + "': not a valid time: hour must be 0..23 and minute 0..59");
+        }
+        // Second 60 exists only at the end of a UTC day that ends with a leap second (SOFA's iauDtf2d merely warns).
+        double secondLimit = 60;
+        if (scale == TimeScale.UTC && year >= 1972 && hour == 23 && minute == 59) {
+            secondLimit += leapAtEndOf(year, month, day);
+        }
+        if (second < 0 || second >= secondLimit) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "time '%s': not a valid date or time: second %s is not in 0..%s on that day", text,
+                    second, secondLimit == 60 ? "59.999" : "60.999"));
+        }
         // SOFA's UTC calendar handles leap-second days; before 1960 UTC means UT (see TimeScales).
         String sofaScale = scale == TimeScale.UTC && year >= 1960 ? "UTC" : "TT";
         try {

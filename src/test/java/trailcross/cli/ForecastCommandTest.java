@@ -105,6 +105,9 @@ class ForecastCommandTest {
         MainTest.Run d = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2028..2027");
         assertThat(d.code()).isEqualTo(Main.BAD_INPUT);
         assertThat(d.err()).contains("the span is reversed");
+        MainTest.Run far = MainTest.run("forecast", "streams/lysandre.toml", "--year", "99999");
+        assertThat(far.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(far.err()).contains("--year 99999 lies outside the span of the ephemeris").contains("years ");
         MainTest.Run e = MainTest.run("forecast", "streams/lysandre.toml", "--year", "20x7");
         assertThat(e.code()).isEqualTo(Main.BAD_INPUT);
         assertThat(e.err()).contains("--year: '20x7'");

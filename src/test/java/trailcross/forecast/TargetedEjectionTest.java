@@ -140,7 +140,7 @@ class TargetedEjectionTest {
         double[] p = plain.stream().mapToDouble(m -> ParticleGenerator.periodAtEjection(m.state(), m.beta())).toArray();
         double[] ones = new double[p.length];
         java.util.Arrays.fill(ones, 1.0);
-        PeriodFocus f = PeriodFocus.learn(java.util.Arrays.copyOf(p, 50), java.util.Arrays.copyOf(ones, 50), 1.0, 0.01, 0.05);
+        PeriodFocus f = PeriodFocus.learn(java.util.Arrays.copyOf(p, 50), java.util.Arrays.copyOf(ones, 50), 3.0, 0.05);
         for (double x : p) {
             assertThat(f.acceptance(x)).isBetween(0.05, 1.0);
         }

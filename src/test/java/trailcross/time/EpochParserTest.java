@@ -67,4 +67,20 @@ class EpochParserTest {
         assertThatThrownBy(() -> EpochParser.parse("2031-13-17T04:12:00Z"))
                 .hasMessageContaining("not a valid date");
     }
+
+    @Test
+    void daysPastTheMonthHour24AndMisplacedLeapSecondsAreErrors() {
+        // Gregorian month lengths (common practice): 1998 and 1900 have no Feb 29, 2000 has.
+        assertThatThrownBy(() -> EpochParser.parse("1998 Feb 30.0 TT")).hasMessageContaining("day 30 is not in 1998-02 (1..28)");
+        assertThatThrownBy(() -> EpochParser.parse("1900-02-29T00:00:00 TT")).hasMessageContaining("not a valid date");
+        assertThat(EpochParser.parse("2000-02-29T00:00:00 TT").daysFrom(EpochParser.parse("2000-02-28T00:00:00 TT")))
+                .isCloseTo(1.0, within(MS));
+        assertThatThrownBy(() -> EpochParser.parse("2031-04-31T00:00:00Z")).hasMessageContaining("not a valid date");
+        assertThatThrownBy(() -> EpochParser.parse("2031-11-17T24:00:00Z")).hasMessageContaining("hour must be 0..23");
+        assertThatThrownBy(() -> EpochParser.parse("2031-11-17T23:60:00Z")).hasMessageContaining("minute 0..59");
+        // A leap second only where IERS inserted one: 2016 Dec 31 (Bulletin C 52), not 2016 Jun 30.
+        assertThat(EpochParser.parse("2016-12-31T23:59:60.5Z")).isNotNull();
+        assertThatThrownBy(() -> EpochParser.parse("2016-06-30T23:59:60Z")).hasMessageContaining("not a valid date");
+        assertThatThrownBy(() -> EpochParser.parse("2016-12-31T23:59:61Z")).hasMessageContaining("not a valid date");
+    }
 }

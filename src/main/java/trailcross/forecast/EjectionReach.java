@@ -1,4 +1,4 @@
-package trailcross.encounter;
+package trailcross.forecast;
 
 import trailcross.ejection.ParticleGenerator;
 import trailcross.orbit.Elements;

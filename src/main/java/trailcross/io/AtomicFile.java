@@ -1,4 +1,4 @@
-package trailcross.report;
+package trailcross.io;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;

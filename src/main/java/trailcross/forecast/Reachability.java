@@ -1,7 +1,8 @@
-package trailcross.encounter;
+package trailcross.forecast;
 
 import java.util.ArrayList;
 import java.util.List;
+import trailcross.encounter.TheoreticalRadiant;
 import trailcross.orbit.Elements;
 import trailcross.orbit.Moid;
 
