@@ -143,6 +143,8 @@ final class ForecastCommand implements Callable<Integer> {
         Path dir = out != null ? out : Path.of("out", name + "-" + (span[1] > span[0] ? span[0] + "-" + span[1] : "" + year));
         ForecastRun.Settings settings = new ForecastRun.Settings(span[0], span[1], from, max, screen, particles, seed,
                 threads, sampling.equals("targeted"));
+        trailcross.io.OutputFolder.check(dir, "--out");
+        trailcross.forecast.ForecastRun.checkMemory(particles, Runtime.getRuntime().maxMemory());
         String fingerprint;
         try {
             fingerprint = "settings " + settings.firstYear() + ".." + settings.lastYear() + " " + settings.targeted()

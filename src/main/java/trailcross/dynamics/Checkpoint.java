@@ -16,7 +16,8 @@ import org.apache.commons.csv.CSVRecord;
 /**
  * Particle states at one epoch, so that a long propagation can resume after a crash: a CSV file
  * (columns {@code id, t_tdb_jd, x_au, y_au, z_au, vx_au_d, vy_au_d, vz_au_d, beta, status}) written to a
- * temporary file beside the target and moved into place, so that a crash never leaves half a checkpoint.
+ * temporary file beside the target and moved into place, so that a crash never leaves half a checkpoint, and
+ * sealed with a checksum of its content ({@link trailcross.io.SealedFile}), so that a damaged one is refused.
  * Numbers are written with 17 significant digits, so that they read back bit for bit.
  */
 public final class Checkpoint {
@@ -42,7 +43,7 @@ public final class Checkpoint {
      * @param entries the particles
      */
     public static void write(Path file, List<Entry> entries) {
-        trailcross.io.AtomicFile.write(file, w -> {
+        trailcross.io.SealedFile.write(file, w -> {
             try (CSVPrinter csv = new CSVPrinter(w,
                     CSVFormat.DEFAULT.builder().setHeader(HEADER).setRecordSeparator('\n').build())) {
                 for (Entry e : entries) {
@@ -62,7 +63,8 @@ public final class Checkpoint {
      */
     public static List<Entry> read(Path file) {
         List<Entry> out = new ArrayList<>();
-        try (Reader r = Files.newBufferedReader(file, StandardCharsets.US_ASCII);
+        String text = trailcross.io.SealedFile.read(file);
+        try (Reader r = new java.io.StringReader(text);
                 CSVParser csv = CSVParser.parse(r, CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).build())) {
             for (String h : HEADER) {
                 if (!csv.getHeaderMap().containsKey(h)) {

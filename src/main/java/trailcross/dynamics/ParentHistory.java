@@ -38,7 +38,7 @@ public final class ParentHistory {
      * @param from first instant
      * @param to last instant
      * @return the history
-     * @throws IllegalStateException when the parent stops early (impact, escape)
+     * @throws IllegalArgumentException when the parent stops early (enters the Sun, hits a body, escapes)
      */
     public static ParentHistory compute(ParentBody parent, ForceModelFactory forces, double epsilon, double from,
             double to) {
@@ -53,8 +53,7 @@ public final class ParentHistory {
             ForceModel f = forces.create(0, parent.a1(), parent.a2(), parent.a3());
             Outcome o = gr.integrate(f, epoch, s0, end, step -> steps.add(step.copy()));
             if (o.status() != Outcome.Status.DONE) {
-                throw new IllegalStateException(parent.name() + ": integration stopped at JD "
-                        + (o.t() + 2451545.0) + " (" + o.status() + " " + o.detail() + ")");
+                throw stopped(parent.name(), o);
             }
         }
         steps.sort(Comparator.comparingDouble(s -> Math.min(s.start(), s.end())));
@@ -80,6 +79,31 @@ public final class ParentHistory {
     private static double radialVelocity(DenseStep step, double t, double[] s) {
         step.state(t, s);
         return s[0] * s[3] + s[1] * s[4] + s[2] * s[5];
+    }
+
+    /**
+     * A parent whose own orbit cannot be followed over the span, said in one line a user can act on: which
+     * body, when (TDB), how far from the Sun, and what to do.
+     *
+     * @param name the parent
+     * @param o how its integration ended
+     * @return the error
+     */
+    static IllegalArgumentException stopped(String name, Outcome o) {
+        double[] x = o.state();
+        double r = Math.sqrt(x[0] * x[0] + x[1] * x[1] + x[2] * x[2]);
+        String when = trailcross.time.EpochFormat.tdb(trailcross.time.Epoch.ofDaysSinceJ2000(o.t()), 0);
+        String what = switch (o.status()) {
+            case HIT_SUN -> String.format(java.util.Locale.ROOT, "enters the Sun on %s (%.2e au from its centre)", when, r);
+            case HIT_BODY -> String.format(java.util.Locale.ROOT, "hits %s on %s (%.4f au from the Sun)",
+                    o.detail().isEmpty() ? "a planet" : o.detail(), when, r);
+            case ESCAPED -> String.format(java.util.Locale.ROOT, "escapes the solar system on %s (%.0f au from the Sun)",
+                    when, r);
+            default -> String.format(java.util.Locale.ROOT, "cannot be integrated past %s (%s, %.4f au from the Sun)",
+                    when, o.status(), r);
+        };
+        return new IllegalArgumentException(name + ": the parent's own orbit " + what
+                + "; choose a span (--since, --year) that stays clear of it, or check the orbit's elements");
     }
 
     /** @return the perihelion passages found, in time order */

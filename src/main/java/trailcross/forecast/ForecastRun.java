@@ -228,7 +228,7 @@ public final class ForecastRun {
         for (Perihelion p : chosen) {
             int ry = ParentReturns.yearOf(p.t());
             long tp = System.nanoTime();
-            TrailCheckpoint.Saved saved = checkpoint == null ? null : checkpoint.read(ry);
+            TrailCheckpoint.Saved saved = checkpoint == null ? null : checkpoint.read(ry, log);
             boolean resumed = saved != null;
             List<NodeCrossing> crossings;
             List<NodeCrossing> axis;
@@ -310,6 +310,30 @@ public final class ForecastRun {
             out.add(new Trail(t.perihelion(), t.returnYear(), t.particles(), t.encounters(), t.axisCrossings(), ms));
         }
         return new Result(s, out, (System.nanoTime() - t0) / 1e9, absolute);
+    }
+
+    /**
+     * Heap held per particle of a trail while it is propagated (its state, its crossing finder, its crossings
+     * and their encounter quantities), bytes: an upper figure from the measured peak heap of `bench forecast`
+     * (see README), with a factor 2 to spare.
+     */
+    public static final long BYTES_PER_PARTICLE = 8192;
+
+    /**
+     * Refuses, before any work, a particle count whose trail would not fit in the heap.
+     *
+     * @param particles particles per return
+     * @param maxHeapBytes the JVM's heap limit
+     * @throws IllegalArgumentException with the estimate and the limit
+     */
+    public static void checkMemory(int particles, long maxHeapBytes) {
+        double need = (double) particles * BYTES_PER_PARTICLE + 300e6;
+        if (need > 0.9 * maxHeapBytes) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "--particles %d needs about %.1f GB of heap for one trail, more than the %.1f GB this JVM may use "
+                            + "(give fewer particles, or more heap with TRAILCROSS_JAVA_OPTS=-Xmx...)", particles,
+                    need / 1e9, maxHeapBytes / 1e9));
+        }
     }
 
     /** An axis meeting farther from the Earth's path than this, without a cloud meeting, is not listed, au. */

@@ -17,8 +17,9 @@ import trailcross.io.AtomicFile;
 /**
  * A forecast's progress on disk, so that {@code --resume} continues a run after a crash with identical
  * results: {@code DIR/progress/settings.txt} holds the run's settings and stream, and each finished
- * trail's node crossings go to {@code DIR/progress/trail-YEAR.csv} (17 significant digits, written
- * atomically). A resumed run reads the finished trails instead of propagating them again and refuses
+ * trail's node crossings go to {@code DIR/progress/trail-YEAR.csv} and its axis family's to
+ * {@code trail-YEAR-axis.csv} (17 significant digits, written atomically, sealed with a checksum of their
+ * content: a damaged one is reported and its trail recomputed, never read back). A resumed run reads the finished trails instead of propagating them again and refuses
  * to mix runs of different settings.
  */
 public final class TrailCheckpoint {
@@ -71,20 +72,27 @@ public final class TrailCheckpoint {
 
     /**
      * @param returnYear a trail
-     * @return its saved crossings, or null when it has not been finished
+     * @param log told, in one line, of a damaged checkpoint (which is then not read back)
+     * @return its saved crossings, or null when it has not been finished or its checkpoint is damaged
      */
-    public Saved read(int returnYear) {
+    public Saved read(int returnYear, java.util.function.Consumer<String> log) {
         Path f = file(returnYear);
         Path a = dir.resolve("trail-" + returnYear + "-axis.csv");
         if (!Files.exists(f) || !Files.exists(a)) {
             return null;
         }
-        return new Saved(readFile(f), readFile(a));
+        try {
+            return new Saved(readFile(f), readFile(a));
+        } catch (trailcross.io.SealedFile.DamagedException e) {
+            log.accept("trail " + returnYear + ": " + e.getMessage() + "; recomputing the trail");
+            return null;
+        }
     }
 
     private static List<NodeCrossing> readFile(Path f) {
         List<NodeCrossing> out = new ArrayList<>();
-        try (Reader r = Files.newBufferedReader(f, StandardCharsets.US_ASCII);
+        String text = trailcross.io.SealedFile.read(f);
+        try (Reader r = new java.io.StringReader(text);
                 CSVParser csv = CSVParser.parse(r, CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).build())) {
             for (CSVRecord rec : csv) {
                 double[] s = new double[6];
@@ -96,8 +104,8 @@ public final class TrailCheckpoint {
                         Boolean.parseBoolean(rec.get("ascending"))));
             }
         } catch (IOException | RuntimeException e) {
-            throw new IllegalArgumentException(f + ": not a readable trail checkpoint (" + e.getMessage()
-                    + "); remove it to recompute that trail");
+            throw new trailcross.io.SealedFile.DamagedException(f + ": damaged: not a readable trail checkpoint ("
+                    + e.getMessage() + ")");
         }
         return out;
     }
@@ -114,7 +122,7 @@ public final class TrailCheckpoint {
     }
 
     private static void writeFile(Path file, List<NodeCrossing> crossings) {
-        AtomicFile.write(file, w -> {
+        trailcross.io.SealedFile.write(file, w -> {
             try (CSVPrinter p = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setHeader(HEADER).setRecordSeparator('\n').build())) {
                 for (NodeCrossing c : crossings) {
                     double[] s = c.state();

@@ -105,6 +105,12 @@ class ForecastCommandTest {
         MainTest.Run d = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2028..2027");
         assertThat(d.code()).isEqualTo(Main.BAD_INPUT);
         assertThat(d.err()).contains("the span is reversed");
+        MainTest.Run huge = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2027", "--particles", "2000000000");
+        assertThat(huge.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(huge.err()).contains("--particles 2000000000 needs about").contains("GB of heap");
+        MainTest.Run file = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2027", "--out", "streams/lysandre.toml");
+        assertThat(file.code()).isEqualTo(Main.BAD_INPUT);
+        assertThat(file.err()).contains("--out streams/lysandre.toml: is a file, not a folder");
         MainTest.Run far = MainTest.run("forecast", "streams/lysandre.toml", "--year", "99999");
         assertThat(far.code()).isEqualTo(Main.BAD_INPUT);
         assertThat(far.err()).contains("--year 99999 lies outside the span of the ephemeris").contains("years ");
@@ -123,7 +129,7 @@ class ForecastCommandTest {
         String crossings = Files.readString(dir.resolve("crossings.csv"));
         // A crash after the first trail: the second trail's checkpoint and the tables are gone.
         try (var s = Files.list(dir.resolve("progress"))) {
-            Path second = s.filter(p -> p.getFileName().toString().startsWith("trail-")).sorted().toList().get(1);
+            Path second = s.filter(p -> p.getFileName().toString().matches("trail-\\d+\\.csv")).sorted().toList().get(1);
             Files.delete(second);
         }
         Files.delete(dir.resolve("encounters.csv"));

@@ -69,7 +69,16 @@ class PropagationTest {
         }
         List<String> lines = new ArrayList<>(Files.readAllLines(f));
         lines.set(2, lines.get(2).replaceFirst(",[^,]+,", ",NaN,"));
+        // Edited behind trailcross' back: the checksum no longer matches, and the file is refused.
         Files.write(f, lines);
+        assertThatThrownBy(() -> Checkpoint.read(f)).isInstanceOf(trailcross.io.SealedFile.DamagedException.class)
+                .hasMessage(f + ": damaged: its checksum does not match its content");
+        // Cut short: no checksum line.
+        Files.write(f, lines.subList(0, 2));
+        assertThatThrownBy(() -> Checkpoint.read(f)).hasMessageContaining("damaged: no checksum line");
+        // Sealed, but with a bad number in it: the number is named.
+        List<String> body = lines.subList(0, lines.size() - 1);
+        trailcross.io.SealedFile.write(f, w -> w.write(String.join("\n", body) + "\n"));
         assertThatThrownBy(() -> Checkpoint.read(f)).hasMessage(f + ":3: t_tdb_jd: not a finite number: 'NaN'");
         assertThatThrownBy(() -> Checkpoint.read(dir.resolve("none.csv"))).hasMessageContaining("no such file");
     }
