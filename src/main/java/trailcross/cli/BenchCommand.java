@@ -113,23 +113,29 @@ final class BenchCommand implements Callable<Integer> {
                         .append('\n');
             }
         }
-        // The figure that matters: the 1899 trail's peak sigma per CPU-minute, plain against targeted sampling
-        // of the same particle count, in the same run.
+        // The figure that matters: a trail's peak sigma per CPU-minute, plain against targeted sampling of the
+        // same particle count, in the same run; on the Leonids' 1899 trail and on the demo's 1993 trail.
         int per = quick ? 1500 : 6000;
-        out.printf(Locale.ROOT, "%nprecision: Leonids 1999, returns since 1898, %d particles per return; the 1899 trail's "
-                + "peak sigma (resampling) and the CPU it cost%n", per);
-        out.printf(Locale.ROOT, "%-10s %12s %10s %9s %8s %16s%n", "sampling", "sigma (min)", "CPU min", "section", "ESS",
-                "sigma^2 x CPU");
-        var plain = trailcross.forecast.ForecastBenchmark.precision(per, false, 2, eph);
-        var targeted = trailcross.forecast.ForecastBenchmark.precision(per, true, 2, eph);
-        for (var p : new trailcross.forecast.ForecastBenchmark.Precision[] {plain, targeted}) {
-            out.printf(Locale.ROOT, "%-10s %12.2f %10.2f %9d %8.0f %16.1f%n", p.sampling(), p.sigmaMin(), p.cpuMinutes(),
-                    p.section(), p.ess(), p.varianceTime());
-            lines.append(p.line()).append('\n');
+        out.printf(Locale.ROOT, "%nprecision: %d particles per return; a trail's peak sigma (resampling) and the CPU it "
+                + "cost: Leonids 1999 (returns since 1898, the 1899 trail) and the demo (2027, its 1993 trail)%n", per);
+        out.printf(Locale.ROOT, "%-14s %-9s %12s %9s %8s %7s %12s %14s%n", "workload", "sampling", "sigma (min)", "CPU min",
+                "section", "ESS", "ESS/CPU-min", "sigma^2 x CPU");
+        for (String w : new String[] {"leonids-1999", "demo"}) {
+            var plain = trailcross.forecast.ForecastBenchmark.precision(w, per, false, 2, eph);
+            var targeted = trailcross.forecast.ForecastBenchmark.precision(w, per, true, 2, eph);
+            for (var p : new trailcross.forecast.ForecastBenchmark.Precision[] {plain, targeted}) {
+                out.printf(Locale.ROOT, "%-14s %-9s %12.2f %9.2f %8d %7.0f %12.1f %14.1f%n", w, p.sampling(), p.sigmaMin(),
+                        p.cpuMinutes(), p.section(), p.ess(), p.ess() / p.cpuMinutes(), p.varianceTime());
+                lines.append(p.line()).append('\n');
+            }
+            double gain = plain.varianceTime() / targeted.varianceTime();
+            double essGain = (targeted.ess() / targeted.cpuMinutes()) / (plain.ess() / plain.cpuMinutes());
+            out.printf(Locale.ROOT, "%s: efficiency gain %.1fx (plain sigma^2 x CPU over targeted), ESS per CPU-minute "
+                    + "gain %.1fx%n", w, gain, essGain);
+            out.flush();
+            lines.append(String.format(Locale.ROOT, "bench forecast precision-gain-%s threads=2 ratio=%.2f ess_ratio=%.2f%n",
+                    w, gain, essGain));
         }
-        double gain = plain.varianceTime() / targeted.varianceTime();
-        out.printf(Locale.ROOT, "efficiency gain (plain sigma^2 x CPU over targeted): %.1fx%n", gain);
-        lines.append(String.format(Locale.ROOT, "bench forecast precision-gain threads=2 ratio=%.2f%n", gain));
         out.print(lines);
         out.flush();
     }

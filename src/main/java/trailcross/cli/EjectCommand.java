@@ -66,6 +66,10 @@ final class EjectCommand implements Callable<Integer> {
         if (particles < 1) {
             throw new IllegalArgumentException("--particles must be >= 1, got " + particles);
         }
+        trailcross.ejection.ParticleGenerator.checkMemory(particles, Runtime.getRuntime().maxMemory());
+        if (out != null) {
+            trailcross.io.OutputFolder.checkFile(out, "--out");
+        }
         if (threads < 1) {
             throw new IllegalArgumentException("--threads must be >= 1, got " + threads);
         }

@@ -144,7 +144,6 @@ final class ForecastCommand implements Callable<Integer> {
         ForecastRun.Settings settings = new ForecastRun.Settings(span[0], span[1], from, max, screen, particles, seed,
                 threads, sampling.equals("targeted"));
         trailcross.io.OutputFolder.check(dir, "--out");
-        trailcross.forecast.ForecastRun.checkMemory(particles, Runtime.getRuntime().maxMemory());
         String fingerprint;
         try {
             fingerprint = "settings " + settings.firstYear() + ".." + settings.lastYear() + " " + settings.targeted()

@@ -338,6 +338,29 @@ public final class ParticleGenerator {
         }
     }
 
+    /**
+     * Heap per particle of a cloud held in memory (a {@link Meteoroid}, its state array, its list slot: ~200
+     * bytes on a 64-bit JVM with compressed pointers), bytes, with a factor 2.5 to spare.
+     */
+    public static final long BYTES_PER_PARTICLE = 512;
+
+    /**
+     * Refuses, before any work, a cloud that would not fit in the heap.
+     *
+     * @param n particles
+     * @param maxHeapBytes the JVM's heap limit
+     * @throws IllegalArgumentException with the estimate and the limit
+     */
+    public static void checkMemory(long n, long maxHeapBytes) {
+        double need = (double) n * BYTES_PER_PARTICLE + 200e6;
+        if (need > 0.9 * maxHeapBytes) {
+            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
+                    "--particles %d needs about %.1f GB of heap, more than the %.1f GB this JVM may use (give fewer "
+                            + "particles, or more heap with TRAILCROSS_JAVA_OPTS=-Xmx...)", n, need / 1e9,
+                    maxHeapBytes / 1e9));
+        }
+    }
+
     /** @return the active arc */
     public ActiveArc arc() {
         return arc;

@@ -79,31 +79,36 @@ public final class ForecastBenchmark {
 
     /**
      * The precision of the forecast's figure that matters against the work it costs: the 1999 Leonids from
-     * 55P's returns since 1898, the 1899 trail's peak σ (resampling, minutes) and the process CPU time, for one
-     * sampling. Since σ falls as 1/√(particles), σ² × CPU-minutes is a figure independent of the particle
+     * 55P's returns since 1898 (the 1899 trail), or the demo's most recent return (the 1993 trail in 2027); the
+     * trail's peak σ (resampling, minutes) and the process CPU time, for one sampling. Since σ falls as 1/√(particles), σ² × CPU-minutes is a figure independent of the particle
      * count; its ratio between plain and targeted sampling is the gain in efficiency.
      *
+     * @param workload "leonids-1999" or "demo"
      * @param particles particles per return
      * @param targeted the sampling
      * @param threads threads
      * @param ephemeris the planets
      * @return sampling, σ (min), CPU minutes, crossings in the trail's section, ESS
      */
-    public static Precision precision(int particles, boolean targeted, int threads, Ephemeris ephemeris) {
-        StreamDefinition d = StreamFileReader.read(Path.of("validation/55p-tempel-tuttle.toml"));
-        ForecastRun.Settings s = new ForecastRun.Settings(1999, 1999, 1898, 0, false, particles, 1, threads, targeted);
+    public static Precision precision(String workload, int particles, boolean targeted, int threads, Ephemeris ephemeris) {
+        boolean demo = workload.equals("demo");
+        StreamDefinition d = StreamFileReader.read(Path.of(demo ? "streams/lysandre.toml" : "validation/55p-tempel-tuttle.toml"));
+        ForecastRun.Settings s = demo ? new ForecastRun.Settings(2027, 2027, 1777, 1, false, particles, 1, threads, targeted)
+                : new ForecastRun.Settings(1999, 1999, 1898, 0, false, particles, 1, threads, targeted);
+        int trail = demo ? 1993 : 1899;
         long cpu0 = cpuNanos();
         ForecastRun.Result r = ForecastRun.run(d, ephemeris, s, line -> { });
         double cpu = (cpuNanos() - cpu0) / 60e9;
-        ForecastRun.Meeting m = r.meetings().stream().filter(x -> x.returnYear() == 1899 && x.cloud() != null)
+        ForecastRun.Meeting m = r.meetings().stream().filter(x -> x.returnYear() == trail && x.cloud() != null)
                 .findFirst().orElse(null);
-        return new Precision(targeted ? "targeted" : "plain", particles, m == null ? Double.NaN : m.cloud().peakSigmaMin(),
+        return new Precision(workload, targeted ? "targeted" : "plain", particles, m == null ? Double.NaN : m.cloud().peakSigmaMin(),
                 cpu, m == null ? 0 : m.cloud().particles(), m == null ? 0 : m.cloud().ess());
     }
 
     /**
      * One precision figure.
      *
+     * @param workload the workload
      * @param sampling plain or targeted
      * @param particles particles per return
      * @param sigmaMin the 1899 trail's peak σ, minutes (NaN when the trail is not met)
@@ -111,7 +116,7 @@ public final class ForecastBenchmark {
      * @param section crossings in the trail's section
      * @param ess their effective number
      */
-    public record Precision(String sampling, int particles, double sigmaMin, double cpuMinutes, int section, double ess) {
+    public record Precision(String workload, String sampling, int particles, double sigmaMin, double cpuMinutes, int section, double ess) {
 
         /** @return σ² × CPU-minutes (min² CPU-min; lower is better) */
         public double varianceTime() {
@@ -120,9 +125,9 @@ public final class ForecastBenchmark {
 
         /** @return the machine-readable line */
         public String line() {
-            return String.format(Locale.ROOT, "bench forecast precision-%s threads=2 particles=%d peak_sigma_min=%.2f "
-                    + "cpu_min=%.2f sigma2_cpu=%.1f section=%d ess=%.0f", sampling, particles, sigmaMin, cpuMinutes,
-                    varianceTime(), section, ess);
+            return String.format(Locale.ROOT, "bench forecast precision-%s-%s threads=2 particles=%d peak_sigma_min=%.2f "
+                    + "cpu_min=%.2f sigma2_cpu=%.1f section=%d ess=%.0f ess_per_cpu_min=%.1f", workload, sampling, particles,
+                    sigmaMin, cpuMinutes, varianceTime(), section, ess, ess / cpuMinutes);
         }
     }
 

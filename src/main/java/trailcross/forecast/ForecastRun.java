@@ -193,6 +193,7 @@ public final class ForecastRun {
         if (s.particles() < 50) {
             throw new IllegalArgumentException("--particles must be >= 50, got " + s.particles());
         }
+        checkMemory(s.particles(), Runtime.getRuntime().maxMemory());
         boolean absolute = stream.parent().dustProductionKgS() != null;
         StreamDefinition run = absolute ? stream : withDust(stream, REFERENCE_DUST_KG_S);
         double[] years = new double[s.lastYear() - s.firstYear() + 2];

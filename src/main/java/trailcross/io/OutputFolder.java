@@ -27,4 +27,20 @@ public final class OutputFolder {
             throw new IllegalArgumentException(option + " " + dir + ": cannot write there (" + e.getMessage() + ")");
         }
     }
+
+    /**
+     * @param file an output file
+     * @param option the option that named it, for the message
+     * @throws IllegalArgumentException in one line when it is a folder or its folder cannot be written
+     */
+    public static void checkFile(Path file, String option) {
+        if (Files.isDirectory(file)) {
+            throw new IllegalArgumentException(option + " " + file + ": is a folder, not a file");
+        }
+        Path parent = file.toAbsolutePath().getParent();
+        if (Files.exists(parent) && !Files.isDirectory(parent)) {
+            throw new IllegalArgumentException(option + " " + file + ": " + parent + " is a file, not a folder");
+        }
+        check(parent, option);
+    }
 }

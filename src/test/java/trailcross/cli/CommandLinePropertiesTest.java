@@ -42,10 +42,16 @@ class CommandLinePropertiesTest {
         Arbitrary<List<String>> check = path.map(p -> List.of("check", p));
         Arbitrary<List<String>> calibrate = Combinators.combine(path, count, Arbitraries.of("-1", "0", "NaN", "abc"))
                 .as((p, n, z) -> List.of("calibrate", p, "--year", "2027", "--trail", "1993", "--zhr", z, "--particles", n));
-        return Arbitraries.oneOf(forecast, timeCmd, eph, moid, check, calibrate);
+        Arbitrary<List<String>> returns = Combinators.combine(path, Arbitraries.of("2000", "3000", "-99999", "abc", "2020"))
+                .as((p, y) -> List.of("returns", p, "--since", y));
+        Arbitrary<List<String>> radiants = Combinators.combine(path, year).as((p, y) -> List.of("radiants", p, "--year", y));
+        Arbitrary<List<String>> eject = Combinators.combine(path, count, Arbitraries.of("1993", "2027", "1800", "abc"),
+                Arbitraries.of("streams", "pom.xml/x.csv")).as((p, n, y, o) -> List.of("eject", p, "--return", y,
+                        "--particles", n, "--out", o));
+        return Arbitraries.oneOf(forecast, timeCmd, eph, moid, check, calibrate, returns, radiants, eject);
     }
 
-    @Property(tries = 120, seed = "20261202")
+    @Property(tries = 160, seed = "20261202")
     void everyCommandLineSucceedsOrFailsInOneLine(@ForAll("commandLines") List<String> args) {
         List<String> a = new ArrayList<>(args);
         if (a.get(0).equals("forecast") && a.get(9).equals("streams")) {
