@@ -17,6 +17,9 @@ import trailcross.time.EpochFormat;
  */
 public final class ForecastTable {
 
+    /** Below this effective sample size a row is marked unreliable (resampling underestimates its spread). */
+    public static final double FEW = 10;
+
     private ForecastTable() {
     }
 
@@ -51,6 +54,11 @@ public final class ForecastTable {
                     m == null ? "-" : String.format(Locale.ROOT, "%.2fh", m.fwhmHours()), intensity,
                     m == null ? "-" : String.format(Locale.ROOT, "%.0f", m.ess()),
                     a == null ? "-" : minute(a.peakT()));
+            if (m != null && m.ess() < FEW) {
+                o.printf(Locale.ROOT, "     only %.0f effective particles behind this row: its figures and their "
+                        + "resampling uncertainties are unreliable (give more --particles)%n",
+                        m.ess());
+            }
             if (mt.timesDisagree()) {
                 o.printf(Locale.ROOT, "     cloud and axis peaks differ by %.0f min, more than twice their uncertainty "
                         + "(cloud %.0f, axis %.1f min)%n", (m.peakT() - a.peakT()) * 1440, m.peakSigmaMin(), a.sigmaMin());
