@@ -246,8 +246,13 @@ public final class ForecastRun {
                 crossings = cloud.crossings();
                 sampling = cloud.description();
                 double parentP = TrailAxis.parentPeriod(p);
-                double[] range = cloud.periodRange(parentP);
-                axis = TrailAxis.compute(p, range[0], range[1], ephemeris, windowStart, windowEnd, years, s.threads());
+                // A parent on an unbound orbit passes once: its debris has no trail axis in the periodic sense.
+                if (Double.isFinite(parentP)) {
+                    double[] range = cloud.periodRange(parentP);
+                    axis = TrailAxis.compute(p, range[0], range[1], ephemeris, windowStart, windowEnd, years, s.threads());
+                } else {
+                    axis = List.of();
+                }
                 if (checkpoint != null) {
                     checkpoint.write(ry, crossings, axis);
                 }

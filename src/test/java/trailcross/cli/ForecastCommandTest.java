@@ -67,6 +67,16 @@ class ForecastCommandTest {
     }
 
     @Test
+    void anUnboundParentIsForecastWithoutATrailAxis() throws IOException {
+        // The invented unbound visitor passes once (2029): its cloud is propagated, no axis is built for it.
+        MainTest.Run r = MainTest.run("forecast", "streams/ossory-visitor.toml", "--year", "2030", "--particles", "200",
+                "--out", dir.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("trail 2029: 200 particles targeted");
+        assertThat(Files.readAllLines(dir.resolve("encounters.csv")).get(0)).startsWith("return_year,");
+    }
+
+    @Test
     void calibrateWritesTheFittedDustProduction() throws IOException {
         Path cal = dir.resolve("calibrated.toml");
         MainTest.Run r = MainTest.run("calibrate", "streams/lysandre.toml", "--year", "2027", "--trail", "1993", "--zhr",
