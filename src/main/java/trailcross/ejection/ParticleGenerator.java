@@ -345,14 +345,27 @@ public final class ParticleGenerator {
     public static final long BYTES_PER_PARTICLE = 512;
 
     /**
-     * Refuses, before any work, a cloud that would not fit in the heap.
+     * Refuses, before any work, a cloud that would not fit in the heap ({@link #BYTES_PER_PARTICLE} each).
      *
      * @param n particles
      * @param maxHeapBytes the JVM's heap limit
      * @throws IllegalArgumentException with the estimate and the limit
      */
     public static void checkMemory(long n, long maxHeapBytes) {
-        double need = (double) n * BYTES_PER_PARTICLE + 200e6;
+        checkMemory(n, BYTES_PER_PARTICLE, 200e6, maxHeapBytes);
+    }
+
+    /**
+     * Refuses, before any work, particles that would not fit in the heap.
+     *
+     * @param n particles
+     * @param bytesEach heap per particle, bytes
+     * @param baseBytes heap needed besides them (ephemeris cache, code), bytes
+     * @param maxHeapBytes the JVM's heap limit
+     * @throws IllegalArgumentException with the estimate and the limit
+     */
+    public static void checkMemory(long n, long bytesEach, double baseBytes, long maxHeapBytes) {
+        double need = (double) n * bytesEach + baseBytes;
         if (need > 0.9 * maxHeapBytes) {
             throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
                     "--particles %d needs about %.1f GB of heap, more than the %.1f GB this JVM may use (give fewer "

@@ -154,24 +154,8 @@ public final class DensityProfile {
             var += w[i] * (x[i] - mean) * (x[i] - mean);
         }
         double sigma = Math.sqrt(var / sw);
-        Integer[] order = new Integer[n];
-        for (int i = 0; i < n; i++) {
-            order[i] = i;
-        }
-        double[] ww = w;
-        Arrays.sort(order, (a, b) -> Double.compare(x[a], x[b]));
-        double q1 = Double.NaN;
-        double q3 = Double.NaN;
-        double acc = 0;
-        for (int i : order) {
-            acc += ww[i];
-            if (Double.isNaN(q1) && acc >= 0.25 * sw) {
-                q1 = x[i];
-            }
-            if (Double.isNaN(q3) && acc >= 0.75 * sw) {
-                q3 = x[i];
-            }
-        }
+        double q1 = weightedQuantile(x, w, 0.25);
+        double q3 = weightedQuantile(x, w, 0.75);
         double iqr = q3 - q1;
         double spread = iqr > 0 ? Math.min(sigma, iqr / 1.34) : sigma;
         double ess = kish(w);
@@ -246,6 +230,37 @@ public final class DensityProfile {
             s += (x - mean) * (x - mean);
         }
         return Math.sqrt(s / (v.length - 1));
+    }
+
+    /**
+     * The weighted quantile: the least x whose cumulative weight (in increasing x) reaches q of the total;
+     * with no positive total, the unweighted element at position q·n.
+     *
+     * @param x the data
+     * @param w their weights (non-negative)
+     * @param q the quantile, in [0, 1]
+     * @return the quantile
+     */
+    public static double weightedQuantile(double[] x, double[] w, double q) {
+        int n = x.length;
+        Integer[] order = new Integer[n];
+        double total = 0;
+        for (int i = 0; i < n; i++) {
+            order[i] = i;
+            total += w[i];
+        }
+        Arrays.sort(order, (a, b) -> Double.compare(x[a], x[b]));
+        if (!(total > 0)) {
+            return x[order[Math.min(n - 1, (int) (q * n))]];
+        }
+        double acc = 0;
+        for (int i : order) {
+            acc += w[i];
+            if (acc >= q * total) {
+                return x[i];
+            }
+        }
+        return x[order[n - 1]];
     }
 
     /**

@@ -141,7 +141,7 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
             double z = (lon[i] - peakLon) / prof.hLambda();
             atPeak[i] = w[i] * Math.exp(-0.5 * z * z);
         }
-        double deltaR = weightedMedian(dr, atPeak);
+        double deltaR = DensityProfile.weightedQuantile(dr, atPeak, 0.5);
         double sx = 0;
         double sy = 0;
         double sz = 0;
@@ -209,26 +209,5 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
             t[j] = peakT + (g[j] - peakLon) * HOURS_PER_DEGREE / 24;
         }
         return t;
-    }
-
-    private static double weightedMedian(double[] x, double[] w) {
-        Integer[] order = new Integer[x.length];
-        double total = 0;
-        for (int i = 0; i < x.length; i++) {
-            order[i] = i;
-            total += w[i];
-        }
-        java.util.Arrays.sort(order, (a, b) -> Double.compare(x[a], x[b]));
-        if (!(total > 0)) {
-            return x[order[x.length / 2]];
-        }
-        double acc = 0;
-        for (int i : order) {
-            acc += w[i];
-            if (acc >= 0.5 * total) {
-                return x[i];
-            }
-        }
-        return x[order[x.length - 1]];
     }
 }

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.Consumer;
 import trailcross.dynamics.Perihelion;
+import trailcross.ejection.ParticleGenerator;
 import trailcross.encounter.AxisMeeting;
 import trailcross.encounter.Encounter;
 import trailcross.encounter.NodeCrossing;
@@ -78,10 +79,8 @@ public final class ForecastRun {
      * @param cloud the cloud's figures, or null when too few particles were near
      * @param axis the axis' meeting nearest the Earth's path, or null when the axis does not meet the Earth
      *     that year
-     * @param relativeIntensity the cloud's ZHR relative to the run's strongest meeting
      */
-    public record Meeting(int year, int returnYear, int revolutions, TrailEncounter cloud, AxisMeeting.Root axis,
-            double relativeIntensity) {
+    public record Meeting(int year, int returnYear, int revolutions, TrailEncounter cloud, AxisMeeting.Root axis) {
 
         /** @return the peak time shown: the cloud's, else the axis' */
         public double peakT() {
@@ -140,6 +139,23 @@ public final class ForecastRun {
                     .thenComparingDouble((Meeting m) -> m.cloud() == null ? 0 : -m.cloud().zhr())
                     .thenComparingDouble(m -> Math.abs(m.cloud() != null ? m.cloud().deltaR() : m.axis().deltaR())));
             return all;
+        }
+
+        /**
+         * @param m one of the run's meetings
+         * @return its cloud's ZHR relative to the run's strongest cloud meeting (NaN without a cloud or when
+         *     every ZHR is zero)
+         */
+        public double relativeIntensity(Meeting m) {
+            double max = 0;
+            for (Trail t : trails) {
+                for (Meeting x : t.meetings()) {
+                    if (x.cloud() != null) {
+                        max = Math.max(max, x.cloud().zhr());
+                    }
+                }
+            }
+            return m.cloud() == null || max == 0 ? Double.NaN : m.cloud().zhr() / max;
         }
     }
 
@@ -231,11 +247,15 @@ public final class ForecastRun {
             long tp = System.nanoTime();
             TrailCheckpoint.Saved saved = checkpoint == null ? null : checkpoint.read(ry, log);
             boolean resumed = saved != null;
-            List<NodeCrossing> crossings;
+            double axisPeriod = TrailAxis.parentPeriod(p);
+            List<Encounter> enc;
             List<NodeCrossing> axis;
             String sampling;
             if (resumed) {
-                crossings = saved.crossings();
+                enc = new ArrayList<>();
+                for (NodeCrossing c : saved.crossings()) {
+                    enc.add(Encounter.of(c, ephemeris, spanStart, spanEnd));
+                }
                 axis = saved.axis();
                 sampling = "read back from the saved run";
             } else {
@@ -243,24 +263,20 @@ public final class ForecastRun {
                 TargetedEjection.Cloud cloud = TargetedEjection.run(rc.generator(), ephemeris, windowStart, windowEnd,
                         spanStart, spanEnd, s.particles(), s.seed() * 1_000_003L + ry, s.targeted(), s.threads(),
                         progress, "trail " + ry);
-                crossings = cloud.crossings();
+                enc = cloud.encounters();
                 sampling = cloud.description();
-                double parentP = TrailAxis.parentPeriod(p);
                 // A parent on an unbound orbit passes once: its debris has no trail axis in the periodic sense.
-                if (Double.isFinite(parentP)) {
-                    double[] range = cloud.periodRange(parentP);
+                if (Double.isFinite(axisPeriod)) {
+                    double[] range = cloud.periodRange(axisPeriod);
                     axis = TrailAxis.compute(p, range[0], range[1], ephemeris, windowStart, windowEnd, years, s.threads());
                 } else {
                     axis = List.of();
                 }
                 if (checkpoint != null) {
-                    checkpoint.write(ry, crossings, axis);
+                    checkpoint.write(ry, cloud.crossings(), axis);
                 }
             }
-            List<Encounter> enc = new ArrayList<>();
-            for (NodeCrossing c : crossings) {
-                enc.add(Encounter.of(c, ephemeris, spanStart, spanEnd));
-            }
+            double gap = 3 * axisSpacing(axis, axisPeriod);
             double parentPeriod = Double.isFinite(period) ? period : p.elements().period();
             List<Meeting> meetings = new ArrayList<>();
             for (int y = 0; y + 1 < years.length; y++) {
@@ -271,14 +287,13 @@ public final class ForecastRun {
                 if (cloudMeeting != null && (cloudMeeting.peakT() < from || cloudMeeting.peakT() >= to)) {
                     cloudMeeting = null;
                 }
-                List<AxisMeeting.Root> roots = AxisMeeting.of(TrailAxis.points(axis, TrailAxis.parentPeriod(p), ephemeris,
-                        from, to), 3 * axisSpacing(axis, TrailAxis.parentPeriod(p)));
+                List<AxisMeeting.Root> roots = AxisMeeting.of(TrailAxis.points(axis, axisPeriod, ephemeris, from, to), gap);
                 AxisMeeting.Root root = roots.stream().filter(r -> r.peakT() >= from && r.peakT() < to)
                         .filter(r -> Math.abs(r.deltaR()) < TrailPropagation.R_MAX - 1).findFirst().orElse(null);
                 if (cloudMeeting != null || (root != null && Math.abs(root.deltaR()) <= AXIS_MEETING_AU)) {
                     double peak = cloudMeeting != null ? cloudMeeting.peakT() : root.peakT();
                     meetings.add(new Meeting(s.firstYear() + y, ry, (int) Math.round((peak - p.t()) / parentPeriod),
-                            cloudMeeting, root, Double.NaN));
+                            cloudMeeting, root));
                 }
             }
             trails.add(new Trail(p, ry, s.particles(), enc, axis, meetings));
@@ -297,25 +312,7 @@ public final class ForecastRun {
             }
             log.accept(line.toString());
         }
-        // Relative intensities: against the run's strongest cloud meeting.
-        double max = 0;
-        for (Trail t : trails) {
-            for (Meeting m : t.meetings()) {
-                if (m.cloud() != null) {
-                    max = Math.max(max, m.cloud().zhr());
-                }
-            }
-        }
-        List<Trail> out = new ArrayList<>();
-        for (Trail t : trails) {
-            List<Meeting> ms = new ArrayList<>();
-            for (Meeting m : t.meetings()) {
-                ms.add(new Meeting(m.year(), m.returnYear(), m.revolutions(), m.cloud(), m.axis(),
-                        m.cloud() == null || max == 0 ? Double.NaN : m.cloud().zhr() / max));
-            }
-            out.add(new Trail(t.perihelion(), t.returnYear(), t.particles(), t.encounters(), t.axisCrossings(), ms));
-        }
-        return new Result(s, out, (System.nanoTime() - t0) / 1e9, absolute);
+        return new Result(s, trails, (System.nanoTime() - t0) / 1e9, absolute);
     }
 
     /**
@@ -333,13 +330,7 @@ public final class ForecastRun {
      * @throws IllegalArgumentException with the estimate and the limit
      */
     public static void checkMemory(int particles, long maxHeapBytes) {
-        double need = (double) particles * BYTES_PER_PARTICLE + 300e6;
-        if (need > 0.9 * maxHeapBytes) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "--particles %d needs about %.1f GB of heap for one trail, more than the %.1f GB this JVM may use "
-                            + "(give fewer particles, or more heap with TRAILCROSS_JAVA_OPTS=-Xmx...)", particles,
-                    need / 1e9, maxHeapBytes / 1e9));
-        }
+        ParticleGenerator.checkMemory(particles, BYTES_PER_PARTICLE, 300e6, maxHeapBytes);
     }
 
     /** An axis meeting farther from the Earth's path than this, without a cloud meeting, is not listed, au. */

@@ -47,11 +47,12 @@ public final class TargetedEjection {
      * A cloud's crossings with their final weights.
      *
      * @param crossings every crossing in the window, weights = real meteoroids (importance included)
+     * @param encounters their encounter quantities inside the span, in the same order
      * @param weights the stages
      * @param hitPeriods the periods at ejection of the particles that came near the Earth
      * @param description one line for the log
      */
-    public record Cloud(List<NodeCrossing> crossings, ImportanceWeights weights, double[] hitPeriods, String description) {
+    public record Cloud(List<NodeCrossing> crossings, List<Encounter> encounters, ImportanceWeights weights, double[] hitPeriods, String description) {
 
         /**
          * The period offsets the trail's axis should span: the central 90% of those of the particles that came
@@ -133,7 +134,7 @@ public final class TargetedEjection {
         try (Progress.Stage stage = progress.open(label, n)) {
             long first = 0;
             for (int k = 0; k < sizes.length; k++) {
-                PeriodFocus focus = k == 0 ? PeriodFocus.PRIOR : learn(enc, raw, weights, prior, k - 1);
+                PeriodFocus focus = k == 0 ? PeriodFocus.PRIOR : learn(enc, weights, prior, k - 1);
                 double[] allocation = k == 0 ? null : allocation(gen, enc);
                 long stageSeed = k == 0 ? seed : seed + 7_919_000_003L * k;
                 List<Meteoroid> cloud = gen.generate(sizes[k], stageSeed, false, threads, focus, first, allocation);
@@ -155,12 +156,18 @@ public final class TargetedEjection {
                 first += sizes[k];
             }
         }
+        // The final weights, over all stages; the encounter quantities already found do not depend on them.
         List<NodeCrossing> out = new ArrayList<>(raw.size());
-        for (NodeCrossing c : raw) {
-            out.add(new NodeCrossing(c.id(), c.returnT(), weights.weight(c.id(), c.initialPeriod()), c.massKg(),
-                    c.initialPeriod(), c.t(), c.state(), c.ascending()));
+        List<Encounter> weighted = new ArrayList<>(raw.size());
+        for (int i = 0; i < raw.size(); i++) {
+            NodeCrossing c = raw.get(i);
+            NodeCrossing w = new NodeCrossing(c.id(), c.returnT(), weights.weight(c.id(), c.initialPeriod()), c.massKg(),
+                    c.initialPeriod(), c.t(), c.state(), c.ascending());
+            Encounter e = enc.get(i);
+            out.add(w);
+            weighted.add(new Encounter(w, e.earthT(), e.deltaR(), e.solarLongitudeDeg(), e.daysAfterEarth(), e.radiant()));
         }
-        return new Cloud(out, weights, hits(enc, WINDOWS[WINDOWS.length - 1], 3), what.toString());
+        return new Cloud(out, weighted, weights, hits(enc, WINDOWS[WINDOWS.length - 1], 3), what.toString());
     }
 
     /** Least share of a later stage's particles in any size bin. */
@@ -197,33 +204,18 @@ public final class TargetedEjection {
     }
 
     /** The proposal of stage k + 1, learned on the crossings so far. */
-    private static PeriodFocus learn(List<Encounter> enc, List<NodeCrossing> raw, ImportanceWeights weights,
-            List<Meteoroid> prior, int k) {
+    private static PeriodFocus learn(List<Encounter> enc, ImportanceWeights weights, List<Meteoroid> prior, int k) {
         Map<Long, double[]> best = nearest(enc);
         if (best.isEmpty()) {
             return PeriodFocus.PRIOR;
         }
-        double window = WINDOWS[k];
-        List<double[]> hits = new ArrayList<>();
-        for (; window <= MAX_WINDOW; window *= 2) {
-            hits.clear();
-            for (var e : best.entrySet()) {
-                if (Math.abs(e.getValue()[0]) <= window && Double.isFinite(e.getValue()[1])) {
-                    hits.add(new double[] {e.getValue()[1], weights.importance(e.getKey(), e.getValue()[1])});
-                }
-            }
-            if (hits.size() >= ENOUGH_HITS[k]) {
-                break;
-            }
-        }
-        PeriodFocus shape;
+        List<Map.Entry<Long, double[]>> hits = near(best, WINDOWS[k], ENOUGH_HITS[k]);
         if (hits.size() >= 3) {
-            double[] p = hits.stream().mapToDouble(h -> h[0]).toArray();
-            double[] w = hits.stream().mapToDouble(h -> h[1]).toArray();
+            double[] p = hits.stream().mapToDouble(h -> h.getValue()[1]).toArray();
+            double[] w = hits.stream().mapToDouble(h -> weights.importance(h.getKey(), h.getValue()[1])).toArray();
             // Silverman's rule of thumb (DensityProfile.bandwidth), widened to explore, at least 0.01 d.
             double h = Math.max(0.01, WIDEN[k] * trailcross.encounter.DensityProfile.bandwidth(p, w));
-            shape = PeriodFocus.learn(p, w, h, 1e-9);
-            return withFloor(shape, prior, f -> PeriodFocus.learn(p, w, h, f));
+            return withFloor(PeriodFocus.learn(p, w, h, 1e-9), prior, f -> PeriodFocus.learn(p, w, h, f));
         }
         // Nobody near yet: aim where the pilot's node times extrapolate to the Earth's passage.
         SimpleRegression fit = new SimpleRegression();
@@ -266,17 +258,31 @@ public final class TargetedEjection {
         return best;
     }
 
-    private static double[] hits(List<Encounter> enc, double window, int least) {
-        Map<Long, double[]> best = nearest(enc);
+    /**
+     * The particles whose crossing came within a window of the Earth's passage, the window doubled (up to
+     * {@value #MAX_WINDOW} days) until at least {@code enough} of them did; the last window's when none
+     * sufficed.
+     */
+    private static List<Map.Entry<Long, double[]>> near(Map<Long, double[]> best, double window, int enough) {
+        List<Map.Entry<Long, double[]>> hits = new ArrayList<>();
         for (double w = window; w <= MAX_WINDOW; w *= 2) {
-            double lim = w;
-            double[] p = best.values().stream().filter(v -> Math.abs(v[0]) <= lim && Double.isFinite(v[1]))
-                    .mapToDouble(v -> v[1]).toArray();
-            if (p.length >= least) {
-                return p;
+            hits.clear();
+            for (var e : best.entrySet()) {
+                if (Math.abs(e.getValue()[0]) <= w && Double.isFinite(e.getValue()[1])) {
+                    hits.add(e);
+                }
+            }
+            if (hits.size() >= enough) {
+                break;
             }
         }
-        return new double[0];
+        return hits;
+    }
+
+    /** The periods at ejection of the particles that came near, or none when fewer than {@code least} did. */
+    private static double[] hits(List<Encounter> enc, double window, int least) {
+        List<Map.Entry<Long, double[]>> hits = near(nearest(enc), window, least);
+        return hits.size() >= least ? hits.stream().mapToDouble(h -> h.getValue()[1]).toArray() : new double[0];
     }
 
     private static double mean(double[] v) {

@@ -82,8 +82,12 @@ public final class ValidationRunner {
                         } catch (java.io.IOException e) {
                             throw new java.io.UncheckedIOException(e);
                         }
-                        StreamDefinition again = StreamFileReader.read(tmp);
-                        ForecastRun.Result r2 = ForecastRun.run(again, ephemeris, st, log);
+                        ForecastRun.Result r2;
+                        try {
+                            r2 = ForecastRun.run(StreamFileReader.read(tmp), ephemeris, st, log);
+                        } finally {
+                            tmp.toFile().delete();
+                        }
                         double z = r2.meetings().stream().filter(m -> m.returnYear() == c.trail() && m.cloud() != null)
                                 .findFirst().orElseThrow().cloud().zhr();
                         double rel = z / c.zhr() - 1;

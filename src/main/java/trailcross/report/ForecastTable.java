@@ -42,8 +42,8 @@ public final class ForecastTable {
             String peak = m == null ? "(cloud too thin)" : String.format(Locale.ROOT, "%s +- %.0f min",
                     minute(m.peakT()), m.peakSigmaMin());
             String intensity = m == null ? "-" : r.absolute() ? String.format(Locale.ROOT, "%.0f +- %.0f", m.zhr(),
-                    m.zhrSigma()) : String.format(Locale.ROOT, "%.3f +- %.3f", mt.relativeIntensity(),
-                    m.zhr() > 0 ? mt.relativeIntensity() * m.zhrSigma() / m.zhr() : 0);
+                    m.zhrSigma()) : String.format(Locale.ROOT, "%.3f +- %.3f", r.relativeIntensity(mt),
+                    m.zhr() > 0 ? r.relativeIntensity(mt) * m.zhrSigma() / m.zhr() : 0);
             o.printf(Locale.ROOT, "%-4d %-5d %3d %-27s %9.4f %9s %9s %6s %6s %-15s %6s %-17s%n", mt.year(),
                     mt.returnYear(), mt.revolutions(), peak,
                     m != null ? m.solarLongitudeDeg() : a.solarLongitudeDeg(),

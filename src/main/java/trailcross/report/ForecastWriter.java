@@ -66,7 +66,7 @@ public final class ForecastWriter {
                     }
                     row.add(mt.returnYear());
                     if (m != null) {
-                        row.addAll(List.of(m.revolutions(), utc(m.peakT()), f(m.solarLongitudeDeg(), 4), f(m.deltaR(), 6),
+                        row.addAll(List.of(mt.revolutions(), utc(m.peakT()), f(m.solarLongitudeDeg(), 4), f(m.deltaR(), 6),
                                 m.particles(), f(m.raDeg(), 2), f(m.decDeg(), 2), f(m.vgKmS(), 2), f(m.fwhmHours(), 2),
                                 r.absolute() ? f(m.zhr(), 0) : "", f(m.peakSigmaMin(), 1)));
                     } else {
@@ -78,7 +78,7 @@ public final class ForecastWriter {
                     row.add(m == null ? "" : f(m.fM(), 4));
                     row.add(m == null ? "" : f(m.ess(), 1));
                     row.add(m == null || !r.absolute() ? "" : f(m.zhrSigma(), 0));
-                    row.add(Double.isNaN(mt.relativeIntensity()) ? "" : f(mt.relativeIntensity(), 4));
+                    row.add(Double.isNaN(r.relativeIntensity(mt)) ? "" : f(r.relativeIntensity(mt), 4));
                     row.add(a == null ? "" : f(a.fM(), 4));
                     row.add(a == null ? "" : f(a.solarLongitudeDeg(), 4));
                     row.add(a == null ? "" : f(a.sigmaMin(), 1));
