@@ -23,7 +23,7 @@ import picocli.CommandLine.Command;
         subcommands = {
             ForecastCommand.class, ReachCommand.class, ReturnsCommand.class, EphemerisCommand.class,
             RadiantsCommand.class, MoidCommand.class, ValidateCommand.class, BenchCommand.class,
-            EjectCommand.class, CheckCommand.class, TimeCommand.class, CalibrateCommand.class,
+            EjectCommand.class, CheckCommand.class, TimeCommand.class, CalibrateCommand.class, ApproachCommand.class,
             CommandLine.HelpCommand.class
         })
 public final class Main implements Runnable {

@@ -106,6 +106,18 @@ public final class ParentHistory {
                 + "; choose a span (--since, --year) that stays clear of it, or check the orbit's elements");
     }
 
+    /**
+     * Hands every stored step of the parent's integration, in time order, to a step handler (e.g. to find
+     * the parent's closest approach to a target on its own dense output).
+     *
+     * @param handler the handler
+     */
+    public void replay(StepHandler handler) {
+        for (DenseStep step : steps) {
+            handler.handle(step);
+        }
+    }
+
     /** @return the perihelion passages found, in time order */
     public List<Perihelion> perihelia() {
         return List.copyOf(perihelia);

@@ -70,6 +70,28 @@ public final class DensityProfile {
             near[i] = shapeWeight[i] * kr[i];
         }
         double hL = Math.max(1e-5, bandwidth(lambda, near));
+        double[] c = new double[n];
+        for (int i = 0; i < n; i++) {
+            c[i] = value[i] * kr[i];
+        }
+        return along(lambda, c, hL, hR, seed);
+    }
+
+    /**
+     * The one-dimensional part: a weighted Gaussian kernel density of contributions c at positions x with
+     * bandwidth h on a grid reaching 3h beyond the data, its maximum, FWHM and their bootstrap uncertainties
+     * ({@value #RESAMPLES} resamples), and 16–84% bands.
+     *
+     * @param x the positions
+     * @param c each one's contribution
+     * @param hL the bandwidth
+     * @param hR the other coordinate's bandwidth, stored in the result
+     * @param seed the bootstrap's seed
+     * @return the profile, or null when the contributions sum to zero
+     */
+    static Result along(double[] x, double[] c, double hL, double hR, long seed) {
+        double[] lambda = x;
+        int n = x.length;
         double lo = Arrays.stream(lambda).min().orElseThrow() - 3 * hL;
         double hi = Arrays.stream(lambda).max().orElseThrow() + 3 * hL;
         double step = Math.max(hL / PER_BANDWIDTH, (hi - lo) / (MAX_GRID - 1));
@@ -77,10 +99,6 @@ public final class DensityProfile {
         double[] grid = new double[m];
         for (int j = 0; j < m; j++) {
             grid[j] = lo + j * step;
-        }
-        double[] c = new double[n];
-        for (int i = 0; i < n; i++) {
-            c[i] = value[i] * kr[i];
         }
         int[] all = new int[n];
         for (int i = 0; i < n; i++) {
@@ -162,7 +180,7 @@ public final class DensityProfile {
         return 0.9 * spread * Math.pow(Math.max(ess, 1), -0.2);
     }
 
-    private static double[] profile(int[] pick, double[] c, double[] lambda, double[] grid, double h) {
+    static double[] profile(int[] pick, double[] c, double[] lambda, double[] grid, double h) {
         double[] p = new double[grid.length];
         double lo = grid[0];
         double step = grid.length > 1 ? grid[1] - grid[0] : 1;
@@ -181,7 +199,7 @@ public final class DensityProfile {
         return p;
     }
 
-    private static int argmax(double[] p) {
+    static int argmax(double[] p) {
         int best = 0;
         for (int j = 1; j < p.length; j++) {
             if (p[j] > p[best]) {
@@ -192,7 +210,7 @@ public final class DensityProfile {
     }
 
     /** The vertex of the parabola through the grid's maximum and its neighbours. */
-    private static double refine(double[] grid, double[] p, int k) {
+    static double refine(double[] grid, double[] p, int k) {
         if (k == 0 || k == p.length - 1) {
             return grid[k];
         }
@@ -205,7 +223,7 @@ public final class DensityProfile {
     }
 
     /** Full width at half maximum about the peak (linear between grid points), the kernel removed in quadrature. */
-    private static double fwhm(double[] grid, double[] p, int k, double h) {
+    static double fwhm(double[] grid, double[] p, int k, double h) {
         double half = 0.5 * p[k];
         int a = k;
         while (a > 0 && p[a] > half) {
@@ -223,7 +241,7 @@ public final class DensityProfile {
         return w > kernel ? Math.sqrt(w * w - kernel * kernel) : 0;
     }
 
-    private static double sd(double[] v) {
+    static double sd(double[] v) {
         double mean = Arrays.stream(v).average().orElse(0);
         double s = 0;
         for (double x : v) {

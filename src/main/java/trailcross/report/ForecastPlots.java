@@ -188,13 +188,13 @@ public final class ForecastPlots {
         return ref + Math.toDegrees(Angles.difference(Math.toRadians(deg), Math.toRadians(ref)));
     }
 
-    private static NumberAxis axis(String label, boolean zero) {
+    static NumberAxis axis(String label, boolean zero) {
         NumberAxis a = new NumberAxis(label);
         a.setAutoRangeIncludesZero(zero);
         return a;
     }
 
-    private static XYLineAndShapeRenderer points(int series) {
+    static XYLineAndShapeRenderer points(int series) {
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(false, true);
         style(r, series);
         return r;
@@ -208,7 +208,7 @@ public final class ForecastPlots {
         }
     }
 
-    private static JFreeChart chart(String title, XYPlot plot) {
+    static JFreeChart chart(String title, XYPlot plot) {
         plot.setBackgroundPaint(new Color(0xf7, 0xf5, 0xf0));
         plot.setDomainGridlinePaint(new Color(0xd8, 0xd4, 0xcc));
         plot.setRangeGridlinePaint(new Color(0xd8, 0xd4, 0xcc));
@@ -217,7 +217,7 @@ public final class ForecastPlots {
         return c;
     }
 
-    private static Path save(Path file, JFreeChart chart) {
+    static Path save(Path file, JFreeChart chart) {
         try {
             Files.createDirectories(file.toAbsolutePath().getParent());
             Path tmp = Files.createTempFile(file.toAbsolutePath().getParent(), "." + file.getFileName(), ".tmp");

@@ -168,7 +168,7 @@ public final class ForecastWriter {
         return written;
     }
 
-    private static String json(String s) {
+    static String json(String s) {
         StringBuilder b = new StringBuilder("\"");
         for (char c : s.toCharArray()) {
             switch (c) {
@@ -191,7 +191,7 @@ public final class ForecastWriter {
         return EpochFormat.utc(Epoch.ofDaysSinceJ2000(t), 0);
     }
 
-    private static String f(double v, int decimals) {
+    static String f(double v, int decimals) {
         return String.format(Locale.ROOT, "%." + decimals + "f", v);
     }
 }

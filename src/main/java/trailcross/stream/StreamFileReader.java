@@ -161,7 +161,8 @@ public final class StreamFileReader {
             throw s.error("model", "crifo1997 needs parent.gas_production_mol_s");
         }
         double scale = positive(s, "speed_scale", 1.0, "factor", 1e-3, 100);
-        double fixed = positive(s, "fixed_speed_m_s", EjectionSettings.DEFAULT_FIXED_SPEED_M_S, "m/s", 0, 1e4);
+        // 0 is allowed: a cold cloud (the parent's own path) is the approach's check case.
+        double fixed = closed(s, "fixed_speed_m_s", EjectionSettings.DEFAULT_FIXED_SPEED_M_S, "m/s", 0, 1e4);
         String dirName = s.optionalString("directions", EjectionSettings.DEFAULT_DIRECTIONS.key(), "a direction law");
         DirectionLaw dirs = DirectionLaw.of(dirName).orElseThrow(() -> s.error("directions",
                 "unknown direction law '" + dirName + "' (known: " + DirectionLaw.names() + ")"));
@@ -224,7 +225,8 @@ public final class StreamFileReader {
         if (!(sIndex > 1 && sIndex < 4)) {
             throw s.error("mass_index", "differential mass index must be in (1, 4), got " + sIndex);
         }
-        double qpr = positive(s, "radiation_pressure_efficiency", ParticleSettings.DEFAULT_QPR, "Q_pr", 0, 2);
+        // Q_pr = 0 switches radiation pressure off (β = 0), for studies and checks.
+        double qpr = closed(s, "radiation_pressure_efficiency", ParticleSettings.DEFAULT_QPR, "Q_pr", 0, 2);
         int bins = s.optionalInt("size_bins", ParticleSettings.DEFAULT_SIZE_BINS);
         if (bins < 1 || bins > 100) {
             throw s.error("size_bins", "must be in 1..100, got " + bins);
@@ -249,6 +251,14 @@ public final class StreamFileReader {
         if (!ok) {
             throw s.error(key, "must be in [" + (int) lo + ", " + (int) hi + (closedHigh ? "]" : ")")
                     + " degrees, got " + v);
+        }
+        return v;
+    }
+
+    private static double closed(TomlSection s, String key, double fallback, String unit, double lo, double hi) {
+        double v = s.optionalDouble(key, fallback, unit);
+        if (!(v >= lo && v <= hi)) {
+            throw s.error(key, "must be in [" + lo + ", " + hi + "] " + unit + ", got " + v);
         }
         return v;
     }
