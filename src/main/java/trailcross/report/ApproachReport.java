@@ -8,6 +8,12 @@ import trailcross.forecast.ApproachRun;
 /** The approach run's one-screen console answer to "can the debris reach the target". */
 public final class ApproachReport {
 
+    /**
+     * Beyond this extra speed a target is called out of reach: cometary dust leaves at metres to hundreds of
+     * metres per second, ~1 km/s at most for the smallest grains near the Sun (common practice).
+     */
+    public static final double OUT_OF_REACH_M_S = 2000;
+
     private ApproachReport() {
     }
 
@@ -52,8 +58,15 @@ public final class ApproachReport {
         } else {
             o.printf(Locale.ROOT, "  answer: no particle of this cloud comes within %s au%s",
                     trim(r.bands().get(0).withinAu()), r.captureRadiusKm() > 0 ? " or is captured" : "");
-            o.printf(Locale.ROOT, Double.isNaN(r.extraSpeedMs()) ? "%n"
-                    : "; about %.0f m/s more ejection speed would have been needed (linear estimate)%n", r.extraSpeedMs());
+            if (Double.isNaN(r.extraSpeedMs())) {
+                o.println();
+            } else if (r.extraSpeedMs() > OUT_OF_REACH_M_S) {
+                o.printf(Locale.ROOT, "; it would take about %.0f km/s more ejection speed (linear estimate): out of reach%n",
+                        r.extraSpeedMs() / 1000);
+            } else {
+                o.printf(Locale.ROOT, "; about %.0f m/s more ejection speed would have been needed (linear estimate)%n",
+                        r.extraSpeedMs());
+            }
         }
         if (!r.absolute()) {
             o.println("  (the stream gives no dust production: numbers are per kg/s of dust)");
