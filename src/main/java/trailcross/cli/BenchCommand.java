@@ -27,6 +27,11 @@ final class BenchCommand implements Callable<Integer> {
             description = "thread counts to measure (default 1,2)")
     int[] threads;
 
+    @Option(names = "--spark", paramLabel = "MASTER",
+            description = "forecast: the Leonids case on this machine's threads and on Spark (e.g. local[2]), walls and "
+                    + "their ratio (needs Spark on the class path: ./trailcross adds it)")
+    String spark;
+
     @Option(names = "--quick", description = "fewer calls (a rough figure in seconds)")
     boolean quick;
 
@@ -87,6 +92,16 @@ final class BenchCommand implements Callable<Integer> {
     }
 
     private void forecast(PrintWriter out) {
+        if (spark != null) {
+            try {
+                Class.forName("org.apache.spark.api.java.JavaSparkContext");
+            } catch (ClassNotFoundException e) {
+                throw new IllegalArgumentException("--spark: Apache Spark is not on the class path (run through "
+                        + "./trailcross, which adds it, or spark-submit)");
+            }
+            SparkBench.run(out, spark, quick ? 400 : 4000, 2);
+            return;
+        }
         int demo = quick ? 200 : 1000;
         int leonids = quick ? 400 : 4000;
         out.printf(Locale.ROOT, "forecast: demo (streams/lysandre.toml, 2027, %d particles per return) and the 1999 Leonids "

@@ -78,6 +78,12 @@ final class ForecastCommand implements Callable<Integer> {
     @Mixin
     EphemerisOption ephemeris;
 
+    /** Where the sampling stages run: on this machine's threads, unless the cluster entry point says otherwise. */
+    static final java.util.function.Function<Path, trailcross.forecast.CloudEngine> LOCAL_ENGINE =
+            file -> trailcross.forecast.CloudEngine.LOCAL;
+    /** The engine for an ephemeris file (set by {@link ClusterMain}). */
+    static volatile java.util.function.Function<Path, trailcross.forecast.CloudEngine> engines = LOCAL_ENGINE;
+
     /** A console progress bar (on standard error, so that standard output stays the table). */
     private static trailcross.forecast.Progress.Stage bar(String label, long total) {
         me.tongfei.progressbar.ProgressBar pb = new me.tongfei.progressbar.ProgressBarBuilder().setTaskName(label)
@@ -158,7 +164,8 @@ final class ForecastCommand implements Callable<Integer> {
                 line -> {
                     o.println(line);
                     o.flush();
-                }, System.console() != null ? ForecastCommand::bar : trailcross.forecast.Progress.NONE, checkpoint);
+                }, System.console() != null ? ForecastCommand::bar : trailcross.forecast.Progress.NONE, checkpoint,
+                engines.apply(ephemeris.file));
         List<Path> files = ForecastWriter.write(dir, stream, r, eph, eph.name(), new Version().getVersion()[0]);
         o.println();
         trailcross.report.ForecastTable.print(o, d.name(), r);

@@ -267,12 +267,44 @@ public final class ParticleGenerator {
         return stratified;
     }
 
+    /**
+     * Particles lo … hi − 1 of the cloud {@code generate(n, seed, false, 1, focus, firstId, allocation)} would
+     * give, bit for bit, drawn without the others after hi (each generator block is seeded from (seed, block);
+     * a slice starting inside a block draws that block's earlier particles again and drops them): what a
+     * cluster task ejects.
+     *
+     * @param n the whole cloud's particles
+     * @param seed the seed
+     * @param focus the proposal
+     * @param firstId the first particle's id of the whole cloud
+     * @param allocation the size-bin shares, or null
+     * @param lo the slice's first position
+     * @param hi one past its last
+     * @return the slice's particles
+     */
+    public List<Meteoroid> generateSlice(int n, long seed, PeriodFocus focus, long firstId, double[] allocation, int lo,
+            int hi) {
+        if (lo < 0 || hi > n || lo >= hi) {
+            throw new IllegalArgumentException("slice " + lo + ".." + hi + " is not inside 0.." + n);
+        }
+        Meteoroid[] out = new Meteoroid[n];
+        for (int b = lo / BLOCK; b * BLOCK < hi; b++) {
+            block(b, n, seed, false, focus, firstId, allocation, out, hi);
+        }
+        return Arrays.asList(Arrays.copyOfRange(out, lo, hi));
+    }
+
     private void block(int b, int n, long seed, boolean quasiRandom, PeriodFocus focus, long firstId,
             double[] allocation, Meteoroid[] out) {
+        block(b, n, seed, quasiRandom, focus, firstId, allocation, out, n);
+    }
+
+    private void block(int b, int n, long seed, boolean quasiRandom, PeriodFocus focus, long firstId,
+            double[] allocation, Meteoroid[] out, int upTo) {
         RandomGenerator rng = new Well19937c(new int[] {(int) seed, (int) (seed >>> 32), b});
         SobolSequenceGenerator sobol = null;
         int from = b * BLOCK;
-        int to = Math.min(n, from + BLOCK);
+        int to = Math.min(Math.min(n, upTo), from + BLOCK);
         if (quasiRandom) {
             sobol = new SobolSequenceGenerator(4);
             sobol.skipTo(from + 1);

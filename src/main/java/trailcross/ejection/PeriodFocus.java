@@ -17,7 +17,7 @@ import java.util.Arrays;
  * @param values the acceptance at the grid points, each in [floor, 1]
  * @param floor the acceptance everywhere off the focus (1 for the prior)
  */
-public record PeriodFocus(double lo, double step, double[] values, double floor) {
+public record PeriodFocus(double lo, double step, double[] values, double floor) implements java.io.Serializable {
 
     /** The prior itself: every candidate kept, every importance weight 1. */
     public static final PeriodFocus PRIOR = new PeriodFocus(0, 1, new double[] {1, 1}, 1);

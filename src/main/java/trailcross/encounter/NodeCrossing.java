@@ -13,7 +13,7 @@ package trailcross.encounter;
  * @param ascending true at the ascending node (moving north through the plane)
  */
 public record NodeCrossing(long id, double returnT, double weight, double massKg, double initialPeriod, double t,
-        double[] state, boolean ascending) {
+        double[] state, boolean ascending) implements java.io.Serializable {
 
     /** @return the heliocentric distance at the crossing, au */
     public double r() {

@@ -49,6 +49,18 @@ public final class ForecastBenchmark {
      * @return the figure
      */
     public static Figure measure(String workload, int particles, int threads, Ephemeris ephemeris) {
+        return measure(workload, particles, threads, ephemeris, CloudEngine.LOCAL);
+    }
+
+    /**
+     * @param workload "demo" or "leonids-1999"
+     * @param particles particles per return
+     * @param threads threads of this machine
+     * @param ephemeris the planets
+     * @param engine where the sampling stages run
+     * @return the figure (CPU time is this JVM's: with a cluster in local mode it includes the tasks)
+     */
+    public static Figure measure(String workload, int particles, int threads, Ephemeris ephemeris, CloudEngine engine) {
         boolean demo = workload.equals("demo");
         StreamDefinition d = StreamFileReader.read(Path.of(demo ? "streams/lysandre.toml" : "validation/55p-tempel-tuttle.toml"));
         ForecastRun.Settings s = demo ? new ForecastRun.Settings(2027, 1777, 4, true, particles, 1, threads)
@@ -58,7 +70,7 @@ public final class ForecastBenchmark {
         }
         long cpu0 = cpuNanos();
         long t0 = System.nanoTime();
-        ForecastRun.Result r = ForecastRun.run(d, ephemeris, s, line -> { });
+        ForecastRun.Result r = ForecastRun.run(d, ephemeris, s, line -> { }, Progress.NONE, null, engine);
         double wall = (System.nanoTime() - t0) / 1e9;
         double cpu = (cpuNanos() - cpu0) / 1e9;
         double end = ParentReturns.yearStart(s.year() + 1);

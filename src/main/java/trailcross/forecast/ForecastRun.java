@@ -196,6 +196,21 @@ public final class ForecastRun {
      */
     public static Result run(StreamDefinition stream, Ephemeris ephemeris, Settings s, Consumer<String> log,
             Progress progress, TrailCheckpoint checkpoint) {
+        return run(stream, ephemeris, s, log, progress, checkpoint, CloudEngine.LOCAL);
+    }
+
+    /**
+     * @param stream the stream
+     * @param ephemeris the planets
+     * @param s the settings
+     * @param log receives one line per stage
+     * @param progress receives the propagation's progress, per trail
+     * @param checkpoint where finished trails are saved and read back (null: none)
+     * @param engine where each return's sampling stages are ejected and propagated (the rest runs here)
+     * @return the result, the same whatever the engine
+     */
+    public static Result run(StreamDefinition stream, Ephemeris ephemeris, Settings s, Consumer<String> log,
+            Progress progress, TrailCheckpoint checkpoint, CloudEngine engine) {
         long t0 = System.nanoTime();
         if (s.lastYear() < s.firstYear()) {
             throw new IllegalArgumentException("--year " + s.firstYear() + ".." + s.lastYear() + ": the span is reversed");
@@ -260,9 +275,13 @@ public final class ForecastRun {
                 sampling = "read back from the saved run";
             } else {
                 ReturnCloud rc = ReturnCloud.from(run, ephemeris, returns.history(), p, ry);
-                TargetedEjection.Cloud cloud = TargetedEjection.run(rc.generator(), ephemeris, windowStart, windowEnd,
-                        spanStart, spanEnd, s.particles(), s.seed() * 1_000_003L + ry, s.targeted(), s.threads(),
-                        progress, "trail " + ry);
+                ReturnRecipe recipe = engine == CloudEngine.LOCAL ? null
+                        : new ReturnRecipe(stream.source().toString(), text(stream), run.parent().dustProductionKgS(),
+                                s.sinceYear(), s.firstYear(), ry);
+                TargetedEjection.Cloud cloud = TargetedEjection.run(rc.generator(),
+                        new trailcross.dynamics.ForceModelFactory(ephemeris, true, true), ephemeris, windowStart,
+                        windowEnd, spanStart, spanEnd, s.particles(), s.seed() * 1_000_003L + ry, s.targeted(),
+                        s.threads(), progress, "trail " + ry, engine, recipe);
                 enc = cloud.encounters();
                 sampling = cloud.description();
                 // A parent on an unbound orbit passes once: its debris has no trail axis in the periodic sense.
@@ -331,6 +350,14 @@ public final class ForecastRun {
      */
     public static void checkMemory(int particles, long maxHeapBytes) {
         ParticleGenerator.checkMemory(particles, BYTES_PER_PARTICLE, 300e6, maxHeapBytes);
+    }
+
+    private static String text(StreamDefinition stream) {
+        try {
+            return java.nio.file.Files.readString(stream.source());
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(stream.source() + ": cannot read: " + e.getMessage(), e);
+        }
     }
 
     /** An axis meeting farther from the Earth's path than this, without a cloud meeting, is not listed, au. */

@@ -122,6 +122,36 @@ public final class TargetedEjection {
             double windowStart, double windowEnd,
             double spanStart, double spanEnd, int n, long seed, boolean targeted, int threads, Progress progress,
             String label) {
+        return run(gen, forces, ephemeris, windowStart, windowEnd, spanStart, spanEnd, n, seed, targeted, threads,
+                progress, label, CloudEngine.LOCAL, null);
+    }
+
+    /**
+     * As {@link #run(ParticleGenerator, trailcross.dynamics.ForceModelFactory, Ephemeris, double, double, double,
+     * double, int, long, boolean, int, Progress, String)}, each stage run by an engine (on this machine with the
+     * given forces when it is {@link CloudEngine#LOCAL}; elsewhere with the full force model, the generator
+     * rebuilt from the recipe).
+     *
+     * @param gen the return's generator
+     * @param forces the force model (local engine)
+     * @param ephemeris the planets
+     * @param windowStart crossings from here, TDB days since J2000
+     * @param windowEnd to here
+     * @param spanStart the forecast span's start
+     * @param spanEnd its end
+     * @param n particles in all
+     * @param seed the trail's seed
+     * @param targeted false: one plain stage of n particles
+     * @param threads worker threads
+     * @param progress where the propagation reports
+     * @param label the progress label
+     * @param engine where the stages run
+     * @param recipe how another machine rebuilds the generator (null with the local engine)
+     * @return the weighted crossings
+     */
+    public static Cloud run(ParticleGenerator gen, trailcross.dynamics.ForceModelFactory forces, Ephemeris ephemeris,
+            double windowStart, double windowEnd, double spanStart, double spanEnd, int n, long seed, boolean targeted,
+            int threads, Progress progress, String label, CloudEngine engine, ReturnRecipe recipe) {
         ImportanceWeights weights = new ImportanceWeights(gen);
         List<NodeCrossing> raw = new ArrayList<>();
         List<Encounter> enc = new ArrayList<>();
@@ -137,7 +167,11 @@ public final class TargetedEjection {
                 PeriodFocus focus = k == 0 ? PeriodFocus.PRIOR : learn(enc, weights, prior, k - 1);
                 double[] allocation = k == 0 ? null : allocation(gen, enc);
                 long stageSeed = k == 0 ? seed : seed + 7_919_000_003L * k;
-                List<Meteoroid> cloud = gen.generate(sizes[k], stageSeed, false, threads, focus, first, allocation);
+                boolean local = engine == CloudEngine.LOCAL;
+                // The local engine ejects here; elsewhere only the pilot is ejected here too (cheap, the prior
+                // keeps every candidate), for the defensive floor of the later proposals.
+                List<Meteoroid> cloud = local || (k == 0 && targeted)
+                        ? gen.generate(sizes[k], stageSeed, false, threads, focus, first, allocation) : null;
                 double[] z = gen.meanAcceptance(focus, Z_DRAWS, stageSeed ^ 0x5DEECE66DL);
                 weights.add(new ImportanceWeights.Stage(focus, first, sizes[k], z, allocation));
                 if (k == 0) {
@@ -147,8 +181,11 @@ public final class TargetedEjection {
                     what.append(String.format(Locale.ROOT, ", stage %d %s Z %.4f", k + 1, focus, mean(z)));
                 }
                 long done = first;
-                List<NodeCrossing> c = TrailPropagation.run(cloud, forces, ephemeris, windowStart, windowEnd, threads,
-                        d -> stage.accept(done + d)).crossings();
+                List<NodeCrossing> c = local
+                        ? TrailPropagation.run(cloud, forces, ephemeris, windowStart, windowEnd, threads,
+                                d -> stage.accept(done + d)).crossings()
+                        : engine.run(new CloudEngine.Stage(recipe, sizes[k], stageSeed, focus, first, allocation,
+                                windowStart, windowEnd), gen, ephemeris, threads, d -> stage.accept(done + d));
                 raw.addAll(c);
                 for (NodeCrossing x : c) {
                     enc.add(Encounter.of(x, ephemeris, spanStart, spanEnd));

@@ -36,17 +36,30 @@ public final class StreamFileReader {
      * @throws StreamFileException for a missing, unreadable, malformed or invalid file
      */
     public static StreamDefinition read(Path file) {
-        TomlParseResult toml;
+        String text;
         try {
             if (Files.isDirectory(file)) {
                 throw new StreamFileException(file, 0, "", "is a directory, not a stream file");
             }
-            toml = Toml.parse(file);
+            text = Files.readString(file);
         } catch (NoSuchFileException e) {
             throw new StreamFileException(file, 0, "", "no such file");
         } catch (IOException e) {
             throw new StreamFileException(file, 0, "", "cannot read: " + e.getMessage());
         }
+        return parse(file, text);
+    }
+
+    /**
+     * The same from the file's text (a cluster's executors get the text, not the file).
+     *
+     * @param file the stream file's name, for messages
+     * @param text its text
+     * @return the validated definition with defaults filled in
+     * @throws StreamFileException for a malformed or invalid text
+     */
+    public static StreamDefinition parse(Path file, String text) {
+        TomlParseResult toml = Toml.parse(text);
         if (toml.hasErrors()) {
             TomlParseError err = toml.errors().get(0);
             TomlPosition p = err.position();

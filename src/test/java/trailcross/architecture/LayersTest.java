@@ -68,4 +68,16 @@ class LayersTest {
                     .because("cli formats and dispatches; computations belong to the stages").check(CLASSES);
         }
     }
+
+    @Test
+    void sparkStaysInTheClusterPackageAndItsEntryPoints() {
+        // Spark is a provided dependency: the local command line must load none of it, so only the cluster
+        // package and the two classes of cli that start it (the spark-submit entry point, the benchmark's
+        // Spark run) may use it.
+        noClasses().that().resideOutsideOfPackage("trailcross.cluster..")
+                .and().doNotHaveFullyQualifiedName("trailcross.cli.ClusterMain")
+                .and().doNotHaveFullyQualifiedName("trailcross.cli.SparkBench")
+                .should().dependOnClassesThat().resideInAnyPackage("org.apache.spark..", "scala..")
+                .because("./trailcross runs without Spark on its class path").check(CLASSES);
+    }
 }
