@@ -18,14 +18,20 @@ public interface ApproachTarget {
      */
     void state(double t, double[] out);
 
-    /** @return the target's GM, au³/d² (0 for a point or a spacecraft) */
-    double gm();
+    /** @return the target's GM, au³/d² (0, the default, for a point or a spacecraft) */
+    default double gm() {
+        return 0;
+    }
 
-    /** @return the target's radius, km (0 for a point) */
-    double radiusKm();
+    /** @return the target's radius, km (0, the default, for a point) */
+    default double radiusKm() {
+        return 0;
+    }
 
-    /** @return the planet's rotation elements, or null when it has none */
-    RotationElements rotation();
+    /** @return the planet's rotation elements, or null (the default) when it has none */
+    default RotationElements rotation() {
+        return null;
+    }
 
     /** @return the first instant the target is known, TDB days since J2000 */
     double firstDay();

@@ -3,7 +3,6 @@ package trailcross.encounter;
 import org.hipparchus.analysis.solvers.BrentSolver;
 import trailcross.ephemeris.Body;
 import trailcross.ephemeris.Ephemeris;
-import trailcross.frames.RotationElements;
 
 /**
  * The Sun–Earth L1 or L2 point, where solar and astrophysical observatories fly: the collinear point of the
@@ -65,21 +64,6 @@ public record LagrangePoint(Ephemeris ephemeris, int which, double gamma) implem
         for (int k = 0; k < 6; k++) {
             out[k] *= f;
         }
-    }
-
-    @Override
-    public double gm() {
-        return 0;
-    }
-
-    @Override
-    public double radiusKm() {
-        return 0;
-    }
-
-    @Override
-    public RotationElements rotation() {
-        return null;
     }
 
     @Override

@@ -11,7 +11,6 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.hipparchus.analysis.interpolation.HermiteInterpolator;
-import trailcross.frames.RotationElements;
 import trailcross.io.CsvNumbers;
 import trailcross.time.EpochParser;
 
@@ -124,21 +123,6 @@ public final class TrackTarget implements ApproachTarget {
         double[][] d = h.derivatives(time - origin, 1);
         System.arraycopy(d[0], 0, out, 0, 3);
         System.arraycopy(d[1], 0, out, 3, 3);
-    }
-
-    @Override
-    public double gm() {
-        return 0;
-    }
-
-    @Override
-    public double radiusKm() {
-        return 0;
-    }
-
-    @Override
-    public RotationElements rotation() {
-        return null;
     }
 
     @Override
