@@ -64,6 +64,11 @@ final class ApproachCommand implements Callable<Integer> {
             description = "particles per return (default " + ApproachRun.DEFAULT_PARTICLES + ")")
     int particles;
 
+    @Option(names = "--sampling", defaultValue = "targeted", paramLabel = "targeted|plain",
+            description = "targeted: for a bound parent, a pilot cloud, then one concentrated on the periods that come "
+                    + "near the target, importance-weighted (default); plain: the ejection law alone")
+    String sampling;
+
     @Option(names = "--seed", defaultValue = "1", paramLabel = "S", description = "random seed (default 1)")
     long seed;
 
@@ -104,6 +109,9 @@ final class ApproachCommand implements Callable<Integer> {
         }
         double t0 = parse("--from", from);
         double t1 = parse("--to", to);
+        if (!sampling.equals("targeted") && !sampling.equals("plain")) {
+            throw new IllegalArgumentException("--sampling: '" + sampling + "' is not targeted or plain");
+        }
         if (within.length == 0) {
             throw new IllegalArgumentException("--within: give at least one distance");
         }
@@ -113,7 +121,7 @@ final class ApproachCommand implements Callable<Integer> {
         Path dir = out != null ? out : Path.of("out", name + "-approach-" + tname);
         trailcross.io.OutputFolder.check(dir, "--out");
         ApproachRun.Settings s = new ApproachRun.Settings(List.copyOf(returnYears), since, t0, t1, particles, seed, threads,
-                atmosphereKm, captureRadiusKm, within, minMassKg == null ? Double.NaN : minMassKg);
+                atmosphereKm, captureRadiusKm, within, minMassKg == null ? Double.NaN : minMassKg, sampling.equals("targeted"));
         PrintWriter o = spec.commandLine().getOut();
         ApproachRun.Result r = ApproachRun.run(d, eph, t, s, line -> {
             o.println(line);

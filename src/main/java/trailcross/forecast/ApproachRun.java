@@ -11,6 +11,7 @@ import trailcross.dynamics.ForceModelFactory;
 import trailcross.dynamics.Perihelion;
 import trailcross.dynamics.Propagator;
 import trailcross.dynamics.TestParticle;
+import trailcross.ejection.ImportanceWeights;
 import trailcross.ejection.Meteoroid;
 import trailcross.ejection.ParticleGenerator;
 import trailcross.ejection.PeriodFocus;
@@ -70,9 +71,12 @@ public final class ApproachRun {
      * @param withinAu the distances to report, au
      * @param minMassKg meteoroids counted in the fluence: above this mass (NaN: above the +6.5-mag mass for the
      *     Earth, all for other targets)
+     * @param targeted a bound parent's cloud in two stages, the second concentrated on the periods that come
+     *     near the target (false: plain sampling of the ejection law)
      */
     public record Settings(List<Integer> returnYears, Integer sinceYear, double from, double to, int particles,
-            long seed, int threads, double atmosphereKm, double captureRadiusKm, double[] withinAu, double minMassKg) {
+            long seed, int threads, double atmosphereKm, double captureRadiusKm, double[] withinAu, double minMassKg,
+            boolean targeted) {
     }
 
     /**
@@ -237,44 +241,75 @@ public final class ApproachRun {
                 stream.parent().name(), s.particles(), String.join(", ", years.stream().map(String::valueOf).toList()),
                 target.name(), utc(s.from()), utc(s.to())));
 
+        ClosestApproach parentFinder = new ClosestApproach(target, s.from(), s.to(), -1);
+        returns.history().replay(parentFinder);
+        Approach parent = parentFinder.result();
+        double probeT = parent == null ? Double.NaN : parent.t();
         List<Meteoroid> cloud = new ArrayList<>();
         ConcurrentHashMap<Long, Integer> returnOf = new ConcurrentHashMap<>();
+        ConcurrentHashMap<Long, ClosestApproach> finders = new ConcurrentHashMap<>();
+        Propagator prop = new Propagator(new ForceModelFactory(ephemeris, true, true), TrailPropagation.EPSILON, 1e4,
+                s.threads());
         int notEjected = 0;
+        boolean earth = target.name().equals("earth");
         for (int k = 0; k < chosen.size(); k++) {
             Perihelion p = chosen.get(k);
             int ry = years.get(k);
-            ReturnCloud rc = ReturnCloud.from(run, ephemeris, returns.history(), p, ry);
-            List<Meteoroid> ms = rc.generator().generate(s.particles(), s.seed() * 1_000_003L + ry, false, s.threads(),
-                    PeriodFocus.PRIOR, (long) k * s.particles());
-            for (Meteoroid m : ms) {
-                if (m.t() > s.to()) {
-                    notEjected++;
-                    continue;
+            ParticleGenerator gen = ReturnCloud.from(run, ephemeris, returns.history(), p, ry).generator();
+            long seed = s.seed() * 1_000_003L + ry;
+            long first = (long) k * s.particles();
+            // A bound parent's cloud is drawn in two stages when targeted: a pilot from the ejection law, then a
+            // proposal in the period at ejection learned on the pilot particles that came near the target
+            // (PeriodFocus, with a defensive floor), importance-weighted by the balance heuristic. An unbound
+            // parent's periods are not finite: its cloud is plain.
+            boolean staged = s.targeted() && Double.isFinite(p.elements().period());
+            int[] sizes = staged ? new int[] {(int) (s.particles() * PILOT_SHARE), 0} : new int[] {s.particles()};
+            if (staged) {
+                sizes[1] = s.particles() - sizes[0];
+            }
+            ImportanceWeights weights = new ImportanceWeights(gen);
+            List<Meteoroid> ret = new ArrayList<>();
+            List<Meteoroid> pilot = null;
+            long id = first;
+            for (int stage = 0; stage < sizes.length; stage++) {
+                PeriodFocus focus = stage == 0 ? PeriodFocus.PRIOR : learn(pilot, finders);
+                // At the Earth the later stage shares its particles among the size bins in proportion to the
+                // meteoroids bright enough to be seen (at the pilot's median relative speed), as the forecast does.
+                double[] allocation = stage == 0 || !earth || !gen.stratified() ? null
+                        : TargetedEjection.allocation(gen, TrailEncounter.massLimitKg(medianSpeedKmS(pilot, finders)));
+                long stageSeed = stage == 0 ? seed : seed + 7_919_000_003L * stage;
+                List<Meteoroid> ms = gen.generate(sizes[stage], stageSeed, false, s.threads(), focus, id, allocation);
+                weights.add(new ImportanceWeights.Stage(focus, id, sizes[stage],
+                        gen.meanAcceptance(focus, TargetedEjection.Z_DRAWS, stageSeed ^ 0x5DEECE66DL), allocation));
+                if (stage == 0) {
+                    pilot = ms;
                 }
-                cloud.add(m);
+                List<Meteoroid> alive = new ArrayList<>();
+                for (Meteoroid m : ms) {
+                    if (m.t() > s.to()) {
+                        notEjected++;
+                    } else {
+                        alive.add(m);
+                    }
+                }
+                propagate(prop, alive, target, s, probeT, finders, progress);
+                ret.addAll(alive);
+                id += sizes[stage];
+            }
+            for (Meteoroid m : ret) {
+                double w = staged ? weights.weight(m.id(), ParticleGenerator.periodAtEjection(m.state(), m.beta()))
+                        : m.weight();
+                cloud.add(new Meteoroid(m.id(), m.returnT(), m.t(), m.state(), m.radiusM(), m.massKg(), m.beta(), w,
+                        m.speedMs()));
                 returnOf.put(m.id(), ry);
             }
         }
         if (cloud.isEmpty()) {
             throw new IllegalArgumentException("every particle would be ejected after --to: choose a later end");
         }
-        ClosestApproach parentFinder = new ClosestApproach(target, s.from(), s.to(), -1);
-        returns.history().replay(parentFinder);
-        Approach parent = parentFinder.result();
-        double probeT = parent == null ? Double.NaN : parent.t();
-        ConcurrentHashMap<Long, ClosestApproach> finders = new ConcurrentHashMap<>();
-        List<TestParticle> particles = cloud.stream().map(Meteoroid::toTestParticle).toList();
-        Propagator prop = new Propagator(new ForceModelFactory(ephemeris, true, true), TrailPropagation.EPSILON, 1e4,
-                s.threads());
-        prop.propagate(particles, s.to(), p -> {
-            ClosestApproach f = new ClosestApproach(target, s.from(), s.to(), p.id(), probeT);
-            finders.put(p.id(), f);
-            return f;
-        }, progress);
         double gm = target.gm();
         double radiusKm = target.radiusKm() > 0 ? target.radiusKm() + s.atmosphereKm() : s.captureRadiusKm();
         double radiusAu = radiusKm / Body.Constants.AU_KM;
-        boolean earth = target.name().equals("earth");
         String massLimit = !Double.isNaN(s.minMassKg()) ? String.format(Locale.ROOT, "above %.3g kg", s.minMassKg())
                 : earth ? "brighter than +6.5 mag" : "all sizes";
         RotationElements rot = target.rotation();
@@ -377,6 +412,67 @@ public final class ApproachRun {
                 radiusKm, captured, total > 0 ? capturedW / total : 0, expected, expectedSigma, nearest, extra, notEjected,
                 absolute, (System.nanoTime() - t0) / 1e9);
     }
+
+    /** Propagates particles to the span's end, each with its closest-approach finder. */
+    private static void propagate(Propagator prop, List<Meteoroid> ms, ApproachTarget target, Settings s, double probeT,
+            ConcurrentHashMap<Long, ClosestApproach> finders, LongConsumer progress) {
+        if (ms.isEmpty()) {
+            return;
+        }
+        prop.propagate(ms.stream().map(Meteoroid::toTestParticle).toList(), s.to(), p -> {
+            ClosestApproach f = new ClosestApproach(target, s.from(), s.to(), p.id(), probeT);
+            finders.put(p.id(), f);
+            return f;
+        }, progress);
+    }
+
+    /**
+     * The second stage's proposal: a kernel density of the periods at ejection of the pilot particles whose
+     * closest approach came within {@value #FIRST_HIT_AU} au (doubled until {@value #ENOUGH_HITS} did, up to
+     * {@value #MAX_HIT_AU} au), bandwidth by Silverman's rule widened by {@value #WIDEN}; the prior when
+     * fewer than three came near.
+     */
+    private static PeriodFocus learn(List<Meteoroid> pilot, ConcurrentHashMap<Long, ClosestApproach> finders) {
+        List<Double> hits = new ArrayList<>();
+        for (double w = FIRST_HIT_AU; w <= MAX_HIT_AU * 1.0001 && hits.size() < ENOUGH_HITS; w *= 2) {
+            hits.clear();
+            for (Meteoroid m : pilot) {
+                ClosestApproach f = finders.get(m.id());
+                Approach a = f == null ? null : f.result();
+                double p0 = ParticleGenerator.periodAtEjection(m.state(), m.beta());
+                if (a != null && a.distance() <= w && Double.isFinite(p0)) {
+                    hits.add(p0);
+                }
+            }
+        }
+        if (hits.size() < 3) {
+            return PeriodFocus.PRIOR;
+        }
+        double[] p = hits.stream().mapToDouble(Double::doubleValue).toArray();
+        double[] w = new double[p.length];
+        Arrays.fill(w, 1.0);
+        double h = Math.max(0.01, WIDEN * DensityProfile.bandwidth(p, w));
+        return TargetedEjection.withFloor(PeriodFocus.learn(p, w, h, 1e-9), pilot, f -> PeriodFocus.learn(p, w, h, f));
+    }
+
+    /** The pilot's median relative speed at closest approach, km/s. */
+    private static double medianSpeedKmS(List<Meteoroid> pilot, ConcurrentHashMap<Long, ClosestApproach> finders) {
+        double[] v = pilot.stream().map(m -> finders.get(m.id())).filter(java.util.Objects::nonNull)
+                .map(ClosestApproach::result).filter(java.util.Objects::nonNull)
+                .mapToDouble(a -> a.speed() * Body.Constants.AU_KM / 86400).sorted().toArray();
+        return v.length == 0 ? 30 : v[v.length / 2];
+    }
+
+    /** Share of a bound parent's particles in the pilot stage. */
+    public static final double PILOT_SHARE = 0.3;
+    /** The pilot's particles nearer than this (au) teach the proposal; the distance is doubled until enough. */
+    public static final double FIRST_HIT_AU = 0.02;
+    /** At most this distance, au. */
+    public static final double MAX_HIT_AU = 0.32;
+    /** Hits wanted. */
+    public static final int ENOUGH_HITS = 10;
+    /** The proposal's bandwidth factor (exploration). */
+    public static final double WIDEN = 1.5;
 
     /**
      * The cloud's spreading rate k at the parent's closest approach: the weighted median over the particles

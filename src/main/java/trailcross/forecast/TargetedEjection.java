@@ -221,7 +221,18 @@ public final class TargetedEjection {
             return null;
         }
         double[] vg = enc.stream().mapToDouble(e -> e.radiant().vgKmS()).sorted().toArray();
-        double limit = trailcross.encounter.TrailEncounter.massLimitKg(vg[vg.length / 2]);
+        return allocation(gen, trailcross.encounter.TrailEncounter.massLimitKg(vg[vg.length / 2]));
+    }
+
+    /**
+     * The size bins' shares in proportion to their numbers of meteoroids above a mass, each at least
+     * {@value #MIN_BIN_SHARE}.
+     *
+     * @param gen the generator (stratified sizes)
+     * @param limit the mass, kg
+     * @return the shares, or null when no bin has meteoroids above it
+     */
+    static double[] allocation(ParticleGenerator gen, double limit) {
         int bins = gen.sizes().bins();
         double[] f = new double[bins];
         double total = 0;
@@ -273,7 +284,7 @@ public final class TargetedEjection {
      * The floor that gives the defensive part about {@link #DEFENSIVE_SHARE} of the proposal's particles:
      * floor = share/(1 − share) × E_p[shape], the shape's prior mean estimated on the pilot (a prior sample).
      */
-    private static PeriodFocus withFloor(PeriodFocus shape, List<Meteoroid> prior,
+    static PeriodFocus withFloor(PeriodFocus shape, List<Meteoroid> prior,
             java.util.function.DoubleFunction<PeriodFocus> make) {
         double mean = 0;
         for (Meteoroid m : prior) {

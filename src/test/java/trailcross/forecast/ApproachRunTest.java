@@ -51,7 +51,7 @@ class ApproachRunTest {
 
     private static ApproachRun.Settings settings(double from, double to, int particles) {
         return new ApproachRun.Settings(List.of(), null, from, to, particles, 5, 2, ApproachRun.DEFAULT_ATMOSPHERE_KM, 0,
-                ApproachRun.DEFAULT_WITHIN_AU, Double.NaN);
+                ApproachRun.DEFAULT_WITHIN_AU, Double.NaN, true);
     }
 
     @Test
@@ -174,15 +174,26 @@ class ApproachRunTest {
                 .findFirst().orElseThrow();
         ApproachRun.Result a = ApproachRun.run(leonids, EPHEMERIS, new BodyTarget(EPHEMERIS, Body.EARTH),
                 new ApproachRun.Settings(List.of(1899), null, day("1999-11-10 UTC"), day("1999-11-26 UTC"), n, seed, 2,
-                        ApproachRun.DEFAULT_ATMOSPHERE_KM, 0, ApproachRun.DEFAULT_WITHIN_AU, Double.NaN), line -> { }, null);
+                        ApproachRun.DEFAULT_ATMOSPHERE_KM, 0, ApproachRun.DEFAULT_WITHIN_AU, Double.NaN, false), line -> { },
+                null);
         assertThat(a.fluence()).isNotNull();
         double sigma = Math.hypot(a.fluence().peakSigmaMin(), node.cloud().peakSigmaMin());
         double diff = (a.fluence().peakT() - node.cloud().peakT()) * 1440;
         assertThat(Math.abs(diff)).as("approach %.1f vs node %.1f min apart, sigma %.0f", diff, diff, sigma)
                 .isLessThanOrEqualTo(2 * sigma);
+        // Targeted sampling (a pilot, then the periods that came near the Earth; 3000 particles) narrows the
+        // approach peak at least threefold, and puts it within three of its standard deviations of the observed
+        // maximum.
+        ApproachRun.Result t = ApproachRun.run(leonids, EPHEMERIS, new BodyTarget(EPHEMERIS, Body.EARTH),
+                new ApproachRun.Settings(List.of(1899), null, day("1999-11-10 UTC"), day("1999-11-26 UTC"), 3000, seed,
+                        2, ApproachRun.DEFAULT_ATMOSPHERE_KM, 0, ApproachRun.DEFAULT_WITHIN_AU, Double.NaN, true),
+                line -> { }, null);
+        assertThat(t.fluence().peakSigmaMin()).isLessThan(a.fluence().peakSigmaMin() / 3);
+        assertThat(t.bands().get(0).particles()).isGreaterThan(a.bands().get(0).particles());
         // Each within three of its own standard deviations of the observed maximum (the node peak also within a day).
         double observed = day("1999-11-18T02:03:30 UTC");
         assertThat(Math.abs(a.fluence().peakT() - observed) * 1440).isLessThan(3 * a.fluence().peakSigmaMin());
+        assertThat(Math.abs(t.fluence().peakT() - observed) * 1440).isLessThan(3 * t.fluence().peakSigmaMin());
         assertThat(Math.abs(node.cloud().peakT() - observed) * 1440).isLessThan(3 * node.cloud().peakSigmaMin());
         assertThat(Math.abs(node.cloud().peakT() - observed)).isLessThan(1.0);
     }
