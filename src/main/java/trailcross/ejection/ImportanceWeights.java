@@ -4,10 +4,10 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The weights of a cloud drawn in stages from several proposals ({@link PeriodFocus}), combined by the
+ * The weights of a cloud drawn in stages from several proposals ({@link EjectionFocus}), combined by the
  * balance heuristic of multiple importance sampling (Veach &amp; Guibas 1995; deterministic-mixture weights,
- * Owen &amp; Zhou 2000): a particle of size bin k and period at ejection P0 stands for
- * <pre>  w = N f_k / Σ_s n_{s,k} a_s(P0) / Z_{s,k}</pre>
+ * Owen &amp; Zhou 2000): a particle of size bin k and conditions at ejection x stands for
+ * <pre>  w = N f_k / Σ_s n_{s,k} a_s(x) / Z_{s,k}</pre>
  * real meteoroids, N the return's meteoroids (M/⟨m⟩), f_k the bin's number fraction, n_{s,k} the particles
  * of stage s in bin k, a_s the stage's acceptance and Z_{s,k} its mean over the prior. Every weighted sum
  * stays an unbiased estimate of the plain cloud's; with every stage the prior, w = N f_k / n_k, the plain
@@ -24,7 +24,7 @@ public final class ImportanceWeights {
      * @param z its normalising constant per size bin
      * @param allocation its particles' shares among the size bins (null: equal)
      */
-    public record Stage(PeriodFocus focus, long firstId, int particles, double[] z, double[] allocation) {
+    public record Stage(EjectionFocus focus, long firstId, int particles, double[] z, double[] allocation) {
     }
 
     private final ParticleGenerator generator;
@@ -71,32 +71,32 @@ public final class ImportanceWeights {
      * The importance factor: prior density over the stages' mixture density, p / Σ_s (n_s/n) q_s.
      *
      * @param id a particle's id
-     * @param p0 its period at ejection, days
+     * @param x its conditions at ejection
      * @return the factor (1 when every stage is the prior)
      */
-    public double importance(long id, double p0) {
+    public double importance(long id, EjectionFocus.Features x) {
         int k = bin(id);
         double n = 0;
         double denom = 0;
         for (Stage s : stages) {
             double nk = generator.inBin(k, s.particles(), s.allocation());
             n += nk;
-            denom += nk * s.focus().acceptance(p0) / s.z()[k];
+            denom += nk * s.focus().acceptance(x) / s.z()[k];
         }
         return n / denom;
     }
 
     /**
      * @param id a particle's id
-     * @param p0 its period at ejection, days
+     * @param x its conditions at ejection
      * @return the real meteoroids it stands for (NaN when the stream gives no dust production)
      */
-    public double weight(long id, double p0) {
+    public double weight(long id, EjectionFocus.Features x) {
         int k = bin(id);
         double n = 0;
         for (Stage s : stages) {
             n += generator.inBin(k, s.particles(), s.allocation());
         }
-        return generator.realMeteoroids() * generator.sizes().numberFraction(k) / n * importance(id, p0);
+        return generator.realMeteoroids() * generator.sizes().numberFraction(k) / n * importance(id, x);
     }
 }

@@ -79,13 +79,13 @@ public final class ParticleGenerator {
      * @return the particles, ids 0 … n − 1
      */
     public List<Meteoroid> generate(int n, long seed, boolean quasiRandom, int threads) {
-        return generate(n, seed, quasiRandom, threads, PeriodFocus.PRIOR, 0);
+        return generate(n, seed, quasiRandom, threads, EjectionFocus.PRIOR, 0);
     }
 
     /**
      * A cloud drawn from a proposal: each particle's candidates come from the stream's own ejection law
-     * and are kept with the focus' acceptance of their period at ejection ({@link PeriodFocus}); with
-     * {@link PeriodFocus#PRIOR} this is the plain cloud, bit for bit. Weights are the physical ones; the
+     * and are kept with the focus' acceptance of their conditions at ejection ({@link EjectionFocus}); with
+     * {@link EjectionFocus#PRIOR} this is the plain cloud, bit for bit. Weights are the physical ones; the
      * importance weights come from {@link ImportanceWeights}.
      *
      * @param n number of particles (≥ 1)
@@ -96,12 +96,12 @@ public final class ParticleGenerator {
      * @param firstId the first particle's id (ids firstId … firstId + n − 1; size bins by position)
      * @return the particles
      */
-    public List<Meteoroid> generate(int n, long seed, boolean quasiRandom, int threads, PeriodFocus focus, long firstId) {
+    public List<Meteoroid> generate(int n, long seed, boolean quasiRandom, int threads, EjectionFocus focus, long firstId) {
         return generate(n, seed, quasiRandom, threads, focus, firstId, null);
     }
 
     /**
-     * As {@link #generate(int, long, boolean, int, PeriodFocus, long)}, with the particles shared among the size
+     * As {@link #generate(int, long, boolean, int, EjectionFocus, long)}, with the particles shared among the size
      * bins in given proportions (stratified sampling with any allocation stays unbiased: a particle of bin k
      * stands for N f_k / n_k meteoroids; Cochran 1977, ch. 5). Bin k takes a contiguous run of positions, its
      * count the largest-remainder rounding of n × share_k.
@@ -115,7 +115,7 @@ public final class ParticleGenerator {
      * @param allocation each bin's share of the particles (null: equal, particle i in bin i mod K)
      * @return the particles
      */
-    public List<Meteoroid> generate(int n, long seed, boolean quasiRandom, int threads, PeriodFocus focus, long firstId,
+    public List<Meteoroid> generate(int n, long seed, boolean quasiRandom, int threads, EjectionFocus focus, long firstId,
             double[] allocation) {
         if (allocation != null && (!stratified || allocation.length != sizes.bins())) {
             throw new IllegalArgumentException("an allocation needs stratified sizes and one share per bin");
@@ -142,17 +142,24 @@ public final class ParticleGenerator {
         return Arrays.asList(out);
     }
 
+    /** Relative standard error aimed at for a proposal's normalising constant Z. */
+    public static final double Z_RELATIVE_ERROR = 0.01;
+    /** Most prior draws per size bin spent on Z. */
+    public static final int Z_MAX_DRAWS = 3_200_000;
+
     /**
-     * The normalising constant of a proposal per size bin, Z_k = E_p[a(P0)] over the stream's own ejection
-     * law in bin k, from {@code draws} candidates per bin (cheap: no integration). Its relative statistical
-     * error is about √((1 − Z)/(draws · Z)) for a 0/1-like acceptance.
+     * The normalising constant of a proposal per size bin, Z_k = E_p[a(x)] over the stream's own ejection
+     * law in bin k (cheap: no integration): the mean acceptance of {@code draws} candidates per bin, then of
+     * as many more again until its standard error is within {@value #Z_RELATIVE_ERROR} of it or
+     * {@value #Z_MAX_DRAWS} candidates are spent (a narrow proposal keeps few candidates, and Z's error is
+     * shared by every weight of its stage).
      *
      * @param focus the proposal
-     * @param draws candidates per bin
+     * @param draws candidates per bin at first
      * @param seed the seed
      * @return Z per bin (all 1 for the prior)
      */
-    public double[] meanAcceptance(PeriodFocus focus, int draws, long seed) {
+    public double[] meanAcceptance(EjectionFocus focus, int draws, long seed) {
         double[] z = new double[sizes.bins()];
         if (focus.isPrior()) {
             Arrays.fill(z, 1.0);
@@ -164,12 +171,23 @@ public final class ParticleGenerator {
             double[] s = new double[6];
             double[] dir = new double[3];
             double sum = 0;
-            for (int j = 0; j < draws; j++) {
-                fill(rng, u);
-                Meteoroid m = draw(j, k, Double.NaN, u, rng, PeriodFocus.PRIOR, s, dir);
-                sum += focus.acceptance(periodAtEjection(m.state(), m.beta()));
+            double sum2 = 0;
+            long done = 0;
+            for (long target = draws;; target = Math.min(2 * target, Z_MAX_DRAWS)) {
+                for (; done < target; done++) {
+                    fill(rng, u);
+                    Meteoroid m = draw(done, k, Double.NaN, u, rng, EjectionFocus.PRIOR, s, dir);
+                    double a = focus.acceptance(m.state(), m.beta());
+                    sum += a;
+                    sum2 += a * a;
+                }
+                double mean = sum / done;
+                double se = Math.sqrt(Math.max(0, sum2 / done - mean * mean) / done);
+                if (se <= Z_RELATIVE_ERROR * mean || done >= Z_MAX_DRAWS) {
+                    break;
+                }
             }
-            z[k] = sum / draws;
+            z[k] = sum / done;
         });
         return z;
     }
@@ -282,7 +300,7 @@ public final class ParticleGenerator {
      * @param hi one past its last
      * @return the slice's particles
      */
-    public List<Meteoroid> generateSlice(int n, long seed, PeriodFocus focus, long firstId, double[] allocation, int lo,
+    public List<Meteoroid> generateSlice(int n, long seed, EjectionFocus focus, long firstId, double[] allocation, int lo,
             int hi) {
         if (lo < 0 || hi > n || lo >= hi) {
             throw new IllegalArgumentException("slice " + lo + ".." + hi + " is not inside 0.." + n);
@@ -294,12 +312,12 @@ public final class ParticleGenerator {
         return Arrays.asList(Arrays.copyOfRange(out, lo, hi));
     }
 
-    private void block(int b, int n, long seed, boolean quasiRandom, PeriodFocus focus, long firstId,
+    private void block(int b, int n, long seed, boolean quasiRandom, EjectionFocus focus, long firstId,
             double[] allocation, Meteoroid[] out) {
         block(b, n, seed, quasiRandom, focus, firstId, allocation, out, n);
     }
 
-    private void block(int b, int n, long seed, boolean quasiRandom, PeriodFocus focus, long firstId,
+    private void block(int b, int n, long seed, boolean quasiRandom, EjectionFocus focus, long firstId,
             double[] allocation, Meteoroid[] out, int upTo) {
         RandomGenerator rng = new Well19937c(new int[] {(int) seed, (int) (seed >>> 32), b});
         SobolSequenceGenerator sobol = null;
@@ -326,7 +344,7 @@ public final class ParticleGenerator {
     }
 
     /** One particle: candidates from u (then from rng) until the nucleus lets it go and the focus keeps it. */
-    private Meteoroid draw(long id, int bin, double weight, double[] u, RandomGenerator rng, PeriodFocus focus,
+    private Meteoroid draw(long id, int bin, double weight, double[] u, RandomGenerator rng, EjectionFocus focus,
             double[] s, double[] dir) {
         int stuck = 0;
         for (long attempt = 0;; attempt++) {
@@ -348,7 +366,7 @@ public final class ParticleGenerator {
                 s[5] += dv * dir[2];
                 double beta = RadiationPressure.beta(qpr, density, radius);
                 // The prior keeps every candidate without a draw, so that its cloud is the plain one bit for bit.
-                if (focus.isPrior() || rng.nextDouble() < focus.acceptance(periodAtEjection(s, beta))) {
+                if (focus.isPrior() || rng.nextDouble() < focus.acceptance(s, beta)) {
                     return new Meteoroid(id, arc.perihelion(), t, s.clone(), radius, mass, beta, weight, v);
                 }
             } else if (++stuck == MAX_REDRAWS) {

@@ -37,7 +37,8 @@ import trailcross.frames.Angles;
  * @param peakT the peak, TDB days since J2000
  * @param peakSigmaMin the peak's 1-σ uncertainty, minutes
  * @param solarLongitudeDeg solar longitude of the peak, degrees
- * @param deltaR delta r, au
+ * @param deltaR delta r, au (the weighted median of the crossings at the peak's longitude)
+ * @param deltaRSigma its 1-σ uncertainty from {@value #BOOTSTRAP} bootstrap resamples of the section, au
  * @param particles particles in the section met
  * @param raDeg radiant RA, degrees
  * @param decDeg radiant Dec, degrees
@@ -50,7 +51,7 @@ import trailcross.frames.Angles;
  * @param profile the activity profile in ZHR against solar longitude
  */
 public record TrailEncounter(double returnT, int revolutions, double peakT, double peakSigmaMin,
-        double solarLongitudeDeg, double deltaR, int particles, double raDeg, double decDeg, double vgKmS,
+        double solarLongitudeDeg, double deltaR, double deltaRSigma, int particles, double raDeg, double decDeg, double vgKmS,
         double fwhmHours, double fM, double zhr, double zhrSigma, double ess, DensityProfile.Result profile) {
 
     /** Along-trail half-window: crossings this many days before or after the Earth, days. */
@@ -59,6 +60,8 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
     public static final int ENOUGH = 12;
     /** ... but not beyond this half-width, days. */
     public static final double MAX_ALONG_TRAIL_DAYS = 80.0;
+    /** Bootstrap resamples for the uncertainty of delta r. */
+    public static final int BOOTSTRAP = 200;
     /** Hours per degree of solar longitude (365.2422 d per 360°). */
     public static final double HOURS_PER_DEGREE = 365.2422 * 24 / 360;
     private static final double AU_KM = Body.Constants.AU_KM;
@@ -142,6 +145,7 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
             atPeak[i] = w[i] * Math.exp(-0.5 * z * z);
         }
         double deltaR = DensityProfile.weightedQuantile(dr, atPeak, 0.5);
+        double deltaRSigma = bootstrapSigma(dr, atPeak, Double.doubleToLongBits(returnT) ^ 0x6A09E667F3BCC909L);
         double sx = 0;
         double sy = 0;
         double sz = 0;
@@ -185,8 +189,34 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
         double fM = 1 / Math.abs(tp.getSlope());
         int revolutions = (int) Math.round((peakT - returnT) / parentPeriodDays);
         return new TrailEncounter(returnT, revolutions, peakT, prof.peakSigma() * HOURS_PER_DEGREE * 60,
-                Angles.normaliseDeg(peakLon), deltaR, n, raDeg, decDeg, vg, prof.fwhm() * HOURS_PER_DEGREE, fM,
+                Angles.normaliseDeg(peakLon), deltaR, deltaRSigma, n, raDeg, decDeg, vg, prof.fwhm() * HOURS_PER_DEGREE, fM,
                 prof.peakValue(), prof.peakValueSigma(), prof.ess(), prof);
+    }
+
+    /**
+     * The standard deviation of the weighted median over bootstrap resamples of the crossings (Efron &amp;
+     * Tibshirani 1993, ch. 6), seeded so that a run is reproducible.
+     */
+    static double bootstrapSigma(double[] values, double[] weights, long seed) {
+        int n = values.length;
+        org.apache.commons.math3.random.RandomGenerator rng = new org.apache.commons.math3.random.Well19937c(
+                new int[] {(int) seed, (int) (seed >>> 32)});
+        double[] v = new double[n];
+        double[] w = new double[n];
+        org.apache.commons.math3.stat.descriptive.SummaryStatistics st = new org.apache.commons.math3.stat.descriptive.SummaryStatistics();
+        for (int b = 0; b < BOOTSTRAP; b++) {
+            double total = 0;
+            for (int i = 0; i < n; i++) {
+                int j = rng.nextInt(n);
+                v[i] = values[j];
+                w[i] = weights[j];
+                total += w[i];
+            }
+            if (total > 0) {
+                st.addValue(DensityProfile.weightedQuantile(v, w, 0.5));
+            }
+        }
+        return st.getN() > 1 ? st.getStandardDeviation() : Double.NaN;
     }
 
     /**

@@ -14,7 +14,7 @@ import trailcross.dynamics.TestParticle;
 import trailcross.ejection.ImportanceWeights;
 import trailcross.ejection.Meteoroid;
 import trailcross.ejection.ParticleGenerator;
-import trailcross.ejection.PeriodFocus;
+import trailcross.ejection.EjectionFocus;
 import trailcross.encounter.Approach;
 import trailcross.encounter.ApproachTarget;
 import trailcross.encounter.Capture;
@@ -260,7 +260,7 @@ public final class ApproachRun {
             long first = (long) k * s.particles();
             // A bound parent's cloud is drawn in two stages when targeted: a pilot from the ejection law, then a
             // proposal in the period at ejection learned on the pilot particles that came near the target
-            // (PeriodFocus, with a defensive floor), importance-weighted by the balance heuristic. An unbound
+            // (EjectionFocus, with a defensive floor), importance-weighted by the balance heuristic. An unbound
             // parent's periods are not finite: its cloud is plain.
             boolean staged = s.targeted() && Double.isFinite(p.elements().period());
             int[] sizes = staged ? new int[] {(int) (s.particles() * PILOT_SHARE), 0} : new int[] {s.particles()};
@@ -272,7 +272,7 @@ public final class ApproachRun {
             List<Meteoroid> pilot = null;
             long id = first;
             for (int stage = 0; stage < sizes.length; stage++) {
-                PeriodFocus focus = stage == 0 ? PeriodFocus.PRIOR : learn(pilot, finders);
+                EjectionFocus focus = stage == 0 ? EjectionFocus.PRIOR : learn(pilot, finders);
                 // At the Earth the later stage shares its particles among the size bins in proportion to the
                 // meteoroids bright enough to be seen (at the pilot's median relative speed), as the forecast does.
                 double[] allocation = stage == 0 || !earth || !gen.stratified() ? null
@@ -297,7 +297,7 @@ public final class ApproachRun {
                 id += sizes[stage];
             }
             for (Meteoroid m : ret) {
-                double w = staged ? weights.weight(m.id(), ParticleGenerator.periodAtEjection(m.state(), m.beta()))
+                double w = staged ? weights.weight(m.id(), EjectionFocus.Features.of(m.state(), m.beta()))
                         : m.weight();
                 cloud.add(new Meteoroid(m.id(), m.returnT(), m.t(), m.state(), m.radiusM(), m.massKg(), m.beta(), w,
                         m.speedMs()));
@@ -432,7 +432,7 @@ public final class ApproachRun {
      * {@value #MAX_HIT_AU} au), bandwidth by Silverman's rule widened by {@value #WIDEN}; the prior when
      * fewer than three came near.
      */
-    private static PeriodFocus learn(List<Meteoroid> pilot, ConcurrentHashMap<Long, ClosestApproach> finders) {
+    private static EjectionFocus learn(List<Meteoroid> pilot, ConcurrentHashMap<Long, ClosestApproach> finders) {
         List<Double> hits = new ArrayList<>();
         for (double w = FIRST_HIT_AU; w <= MAX_HIT_AU * 1.0001 && hits.size() < ENOUGH_HITS; w *= 2) {
             hits.clear();
@@ -446,13 +446,13 @@ public final class ApproachRun {
             }
         }
         if (hits.size() < 3) {
-            return PeriodFocus.PRIOR;
+            return EjectionFocus.PRIOR;
         }
         double[] p = hits.stream().mapToDouble(Double::doubleValue).toArray();
         double[] w = new double[p.length];
         Arrays.fill(w, 1.0);
         double h = Math.max(0.01, WIDEN * DensityProfile.bandwidth(p, w));
-        return TargetedEjection.withFloor(PeriodFocus.learn(p, w, h, 1e-9), pilot, f -> PeriodFocus.learn(p, w, h, f));
+        return TargetedEjection.withFloor(EjectionFocus.learn(p, w, h, 1e-9), pilot, f -> EjectionFocus.learn(p, w, h, f));
     }
 
     /** The pilot's median relative speed at closest approach, km/s. */

@@ -3,7 +3,7 @@ package trailcross.forecast;
 import java.util.List;
 import java.util.function.LongConsumer;
 import trailcross.ejection.ParticleGenerator;
-import trailcross.ejection.PeriodFocus;
+import trailcross.ejection.EjectionFocus;
 import trailcross.encounter.NodeCrossing;
 import trailcross.ephemeris.Ephemeris;
 
@@ -27,7 +27,7 @@ public interface CloudEngine {
      * @param windowStart crossings from here, TDB days since J2000
      * @param windowEnd to here
      */
-    record Stage(ReturnRecipe recipe, int n, long seed, PeriodFocus focus, long firstId, double[] allocation,
+    record Stage(ReturnRecipe recipe, int n, long seed, EjectionFocus focus, long firstId, double[] allocation,
             double windowStart, double windowEnd) implements java.io.Serializable {
     }
 

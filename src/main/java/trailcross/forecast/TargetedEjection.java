@@ -8,7 +8,7 @@ import org.apache.commons.math3.stat.regression.SimpleRegression;
 import trailcross.ejection.ImportanceWeights;
 import trailcross.ejection.Meteoroid;
 import trailcross.ejection.ParticleGenerator;
-import trailcross.ejection.PeriodFocus;
+import trailcross.ejection.EjectionFocus;
 import trailcross.encounter.Encounter;
 import trailcross.encounter.NodeCrossing;
 import trailcross.ephemeris.Ephemeris;
@@ -19,7 +19,7 @@ import trailcross.ephemeris.Ephemeris;
  * law ({@value #PILOT_SHARE} of the particles) shows which periods put a particle at its node near the Earth
  * in the forecast years (its node passage within a window of the Earth's passage of the same longitude);
  * a second stage ({@value #SECOND_SHARE}) is drawn from a proposal concentrated there
- * ({@link PeriodFocus#learn}, bandwidth widened to explore), and the main stage (the rest) from a proposal
+ * ({@link EjectionFocus#learn}, bandwidth widened to explore), and the main stage (the rest) from a proposal
  * learned again on both earlier stages with a narrower window. When no pilot particle comes near yet, the
  * period that would is extrapolated from the pilot's node times (least squares) and aimed at. Every stage's
  * particles are kept and weighted by the balance heuristic ({@link ImportanceWeights}), so every weighted
@@ -31,7 +31,7 @@ public final class TargetedEjection {
     public static final double PILOT_SHARE = 0.2;
     /** Share in the second stage. */
     public static final double SECOND_SHARE = 0.2;
-    /** Prior draws per size bin for a proposal's normalising constant (relative error ~1/√(draws Z)). */
+    /** First prior draws per size bin for a proposal's normalising constant (more follow until it is within 1%). */
     public static final int Z_DRAWS = 200_000;
     /** Share of a proposal's particles meant to come from its defensive floor. */
     public static final double DEFENSIVE_SHARE = 0.1;
@@ -160,11 +160,12 @@ public final class TargetedEjection {
             sizes[2] = n - sizes[0] - sizes[1];
         }
         List<Meteoroid> prior = null;
+        Map<Long, EjectionFocus.Features> features = new java.util.HashMap<>();
         StringBuilder what = new StringBuilder(targeted ? "targeted" : "plain");
         try (Progress.Stage stage = progress.open(label, n)) {
             long first = 0;
             for (int k = 0; k < sizes.length; k++) {
-                PeriodFocus focus = k == 0 ? PeriodFocus.PRIOR : learn(enc, weights, prior, k - 1);
+                EjectionFocus focus = k == 0 ? EjectionFocus.PRIOR : learn(enc, weights, prior, features, k - 1);
                 double[] allocation = k == 0 ? null : allocation(gen, enc);
                 long stageSeed = k == 0 ? seed : seed + 7_919_000_003L * k;
                 boolean local = engine == CloudEngine.LOCAL;
@@ -172,6 +173,15 @@ public final class TargetedEjection {
                 // keeps every candidate), for the defensive floor of the later proposals.
                 List<Meteoroid> cloud = local || (k == 0 && targeted)
                         ? gen.generate(sizes[k], stageSeed, false, threads, focus, first, allocation) : null;
+                // Weights and the next proposal need each particle's conditions at ejection; a remote stage's
+                // particles are drawn again here (cheap next to their integration, and bit for bit the same).
+                if (targeted) {
+                    List<Meteoroid> drawn = cloud != null ? cloud
+                            : gen.generate(sizes[k], stageSeed, false, threads, focus, first, allocation);
+                    for (Meteoroid m : drawn) {
+                        features.put(m.id(), EjectionFocus.Features.of(m.state(), m.beta()));
+                    }
+                }
                 double[] z = gen.meanAcceptance(focus, Z_DRAWS, stageSeed ^ 0x5DEECE66DL);
                 weights.add(new ImportanceWeights.Stage(focus, first, sizes[k], z, allocation));
                 if (k == 0) {
@@ -198,7 +208,9 @@ public final class TargetedEjection {
         List<Encounter> weighted = new ArrayList<>(raw.size());
         for (int i = 0; i < raw.size(); i++) {
             NodeCrossing c = raw.get(i);
-            NodeCrossing w = new NodeCrossing(c.id(), c.returnT(), weights.weight(c.id(), c.initialPeriod()), c.massKg(),
+            double weight = targeted ? weights.weight(c.id(), features.get(c.id()))
+                    : weights.weight(c.id(), new EjectionFocus.Features(c.initialPeriod(), Double.NaN, Double.NaN, 0));
+            NodeCrossing w = new NodeCrossing(c.id(), c.returnT(), weight, c.massKg(),
                     c.initialPeriod(), c.t(), c.state(), c.ascending());
             Encounter e = enc.get(i);
             out.add(w);
@@ -251,19 +263,29 @@ public final class TargetedEjection {
         return share;
     }
 
-    /** The proposal of stage k + 1, learned on the crossings so far. */
-    private static PeriodFocus learn(List<Encounter> enc, ImportanceWeights weights, List<Meteoroid> prior, int k) {
+    /**
+     * The proposal of stage k + 1, learned on the crossings so far: a focus in P0 on the particles whose node
+     * passage came near the Earth's, and on the same particles, when it explains their delta r, a
+     * {@link EjectionFocus.NodeModel} that aims at the Earth's path.
+     */
+    private static EjectionFocus learn(List<Encounter> enc, ImportanceWeights weights, List<Meteoroid> prior,
+            Map<Long, EjectionFocus.Features> features, int k) {
         Map<Long, double[]> best = nearest(enc);
         if (best.isEmpty()) {
-            return PeriodFocus.PRIOR;
+            return EjectionFocus.PRIOR;
         }
         List<Map.Entry<Long, double[]>> hits = near(best, WINDOWS[k], ENOUGH_HITS[k]);
         if (hits.size() >= 3) {
             double[] p = hits.stream().mapToDouble(h -> h.getValue()[1]).toArray();
-            double[] w = hits.stream().mapToDouble(h -> weights.importance(h.getKey(), h.getValue()[1])).toArray();
+            double[] w = hits.stream().mapToDouble(h -> weights.importance(h.getKey(), features.get(h.getKey())))
+                    .toArray();
             // Silverman's rule of thumb (DensityProfile.bandwidth), widened to explore, at least 0.01 d.
             double h = Math.max(0.01, WIDEN[k] * trailcross.encounter.DensityProfile.bandwidth(p, w));
-            return withFloor(PeriodFocus.learn(p, w, h, 1e-9), prior, f -> PeriodFocus.learn(p, w, h, f));
+            // The second stage keeps exploring across delta r (the section's profile and delta r need it); the main
+            // stage aims at the Earth's path too, where the intensity and the peak are read.
+            EjectionFocus.NodeModel node = k == WINDOWS.length - 1 ? nodeModel(hits, features) : null;
+            return withFloor(EjectionFocus.learn(p, w, h, 1e-9).withNode(node), prior,
+                    f -> EjectionFocus.learn(p, w, h, f).withNode(node));
         }
         // Nobody near yet: aim where the pilot's node times extrapolate to the Earth's passage.
         SimpleRegression fit = new SimpleRegression();
@@ -273,34 +295,54 @@ public final class TargetedEjection {
             }
         }
         if (fit.getN() < 5 || !(Math.abs(fit.getSlope()) > 0.1)) {
-            return PeriodFocus.PRIOR;
+            return EjectionFocus.PRIOR;
         }
         double centre = -fit.getIntercept() / fit.getSlope();
         double width = Math.max(0.5, 2 * Math.sqrt(fit.getMeanSquareError()) / Math.abs(fit.getSlope()));
-        return withFloor(PeriodFocus.around(centre, width, 1e-9), prior, f -> PeriodFocus.around(centre, width, f));
+        return withFloor(EjectionFocus.around(centre, width, 1e-9), prior, f -> EjectionFocus.around(centre, width, f));
+    }
+
+    /** The delta r model of the near particles at the node most of them met the Earth's path at, or null. */
+    private static EjectionFocus.NodeModel nodeModel(List<Map.Entry<Long, double[]>> hits,
+            Map<Long, EjectionFocus.Features> features) {
+        long ascending = hits.stream().filter(h -> h.getValue()[3] > 0).count();
+        boolean asc = 2 * ascending > hits.size();
+        List<EjectionFocus.Features> x = new ArrayList<>();
+        List<Double> dr = new ArrayList<>();
+        for (var h : hits) {
+            if ((h.getValue()[3] > 0) == asc && Double.isFinite(h.getValue()[2])) {
+                x.add(features.get(h.getKey()));
+                dr.add(h.getValue()[2]);
+            }
+        }
+        return EjectionFocus.NodeModel.fit(x, dr.stream().mapToDouble(Double::doubleValue).toArray(), asc);
     }
 
     /**
      * The floor that gives the defensive part about {@link #DEFENSIVE_SHARE} of the proposal's particles:
      * floor = share/(1 − share) × E_p[shape], the shape's prior mean estimated on the pilot (a prior sample).
      */
-    static PeriodFocus withFloor(PeriodFocus shape, List<Meteoroid> prior,
-            java.util.function.DoubleFunction<PeriodFocus> make) {
+    static EjectionFocus withFloor(EjectionFocus shape, List<Meteoroid> prior,
+            java.util.function.DoubleFunction<EjectionFocus> make) {
         double mean = 0;
         for (Meteoroid m : prior) {
-            mean += shape.acceptance(ParticleGenerator.periodAtEjection(m.state(), m.beta())) / prior.size();
+            mean += shape.acceptance(m.state(), m.beta()) / prior.size();
         }
         double floor = Math.min(0.5, Math.max(1e-4, DEFENSIVE_SHARE / (1 - DEFENSIVE_SHARE) * mean));
         return make.apply(floor);
     }
 
-    /** Per particle: its crossing nearest the Earth's passage, as (days after the Earth, P0). */
+    /**
+     * Per particle: its crossing nearest the Earth's passage, as (days after the Earth, P0, delta r, 1 if it
+     * crossed northwards else 0).
+     */
     private static Map<Long, double[]> nearest(List<Encounter> enc) {
         Map<Long, double[]> best = new java.util.TreeMap<>();
         for (Encounter e : enc) {
             double[] old = best.get(e.crossing().id());
             if (old == null || Math.abs(e.daysAfterEarth()) < Math.abs(old[0])) {
-                best.put(e.crossing().id(), new double[] {e.daysAfterEarth(), e.crossing().initialPeriod()});
+                best.put(e.crossing().id(), new double[] {e.daysAfterEarth(), e.crossing().initialPeriod(), e.deltaR(),
+                        e.crossing().ascending() ? 1 : 0});
             }
         }
         return best;

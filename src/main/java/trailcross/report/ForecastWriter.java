@@ -51,7 +51,7 @@ public final class ForecastWriter {
             List<String> header = new ArrayList<>(List.of("return_year", "revolutions", "peak_utc", "solar_longitude_deg",
                     "delta_r_au", "particles", "ra_deg", "dec_deg", "vg_km_s", "fwhm_h", "zhr", "peak_sigma_min",
                     "axis_peak_utc", "axis_delta_r_au", "fm", "ess", "zhr_sigma", "relative_intensity", "axis_fm",
-                    "axis_solar_longitude_deg", "axis_sigma_min", "times_disagree"));
+                    "axis_solar_longitude_deg", "axis_sigma_min", "times_disagree", "delta_r_sigma_au"));
             if (span) {
                 header.add(0, "year");
             }
@@ -83,6 +83,7 @@ public final class ForecastWriter {
                     row.add(a == null ? "" : f(a.solarLongitudeDeg(), 4));
                     row.add(a == null ? "" : f(a.sigmaMin(), 1));
                     row.add(mt.timesDisagree());
+                    row.add(m == null || Double.isNaN(m.deltaRSigma()) ? "" : f(m.deltaRSigma(), 6));
                     p.printRecord(row);
                 }
             }
@@ -153,9 +154,12 @@ public final class ForecastWriter {
             for (ForecastRun.Meeting mt : r.meetings()) {
                 TrailEncounter m = mt.cloud();
                 items.add(String.format(Locale.ROOT, "    {\"year\": %d, \"return_year\": %d, \"ess\": %s, \"peak_utc\": %s, "
-                        + "\"peak_sigma_min\": %s, \"axis_peak_utc\": %s, \"axis_delta_r_au\": %s}", mt.year(),
+                        + "\"peak_sigma_min\": %s, \"delta_r_au\": %s, \"delta_r_sigma_au\": %s, \"axis_peak_utc\": %s, "
+                        + "\"axis_delta_r_au\": %s}", mt.year(),
                         mt.returnYear(), m == null ? "null" : f(m.ess(), 1), json(utc(mt.peakT())),
-                        m == null ? "null" : f(m.peakSigmaMin(), 1), mt.axis() == null ? "null" : json(utc(mt.axis().peakT())),
+                        m == null ? "null" : f(m.peakSigmaMin(), 1), m == null ? "null" : f(m.deltaR(), 6),
+                        m == null || Double.isNaN(m.deltaRSigma()) ? "null" : f(m.deltaRSigma(), 6),
+                        mt.axis() == null ? "null" : json(utc(mt.axis().peakT())),
                         mt.axis() == null ? "null" : f(mt.axis().deltaR(), 6)));
             }
             w.write(String.join(",\n", items));

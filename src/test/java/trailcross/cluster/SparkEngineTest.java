@@ -12,7 +12,7 @@ import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import trailcross.ejection.PeriodFocus;
+import trailcross.ejection.EjectionFocus;
 import trailcross.encounter.NodeCrossing;
 import trailcross.ephemeris.Ephemerides;
 import trailcross.ephemeris.Ephemeris;
@@ -73,7 +73,7 @@ class SparkEngineTest {
         ReturnRecipe recipe = new ReturnRecipe(file.toString(), Files.readString(file), 2000.0, 1980, 2027, 1993);
         double from = trailcross.forecast.ParentReturns.yearStart(2027) - ForecastRun.EDGE_DAYS;
         double to = trailcross.forecast.ParentReturns.yearStart(2028) + ForecastRun.EDGE_DAYS;
-        CloudEngine.Stage stage = new CloudEngine.Stage(recipe, SparkEngine.SLICE + 40, 11, PeriodFocus.PRIOR, 0, null,
+        CloudEngine.Stage stage = new CloudEngine.Stage(recipe, SparkEngine.SLICE + 40, 11, EjectionFocus.PRIOR, 0, null,
                 from, to);
         List<NodeCrossing> once = SliceTask.run(stage, null, 1);
         List<NodeCrossing> twice = SliceTask.run(stage, null, 1);

@@ -13,7 +13,7 @@ import trailcross.ejection.ActiveArc;
 import trailcross.ejection.ImportanceWeights;
 import trailcross.ejection.Meteoroid;
 import trailcross.ejection.ParticleGenerator;
-import trailcross.ejection.PeriodFocus;
+import trailcross.ejection.EjectionFocus;
 import trailcross.encounter.Encounter;
 import trailcross.encounter.NodeCrossing;
 import trailcross.ephemeris.Body;
@@ -65,11 +65,17 @@ class TargetedEjectionTest {
 
     /** Per size bin: Σ y, Σ y², with y = w h / N (the particle's share of the estimate). */
     private static double[] estimate(TargetedEjection.Cloud c, ParticleGenerator g, double from, double to) {
+        return estimate(c, g, from, to, Double.POSITIVE_INFINITY);
+    }
+
+    /** As above, counting only crossings within maxDeltaR of the Earth's orbit. */
+    private static double[] estimate(TargetedEjection.Cloud c, ParticleGenerator g, double from, double to,
+            double maxDeltaR) {
         Map<Long, Boolean> hit = new HashMap<>();
         Map<Long, Double> w = new HashMap<>();
         for (NodeCrossing x : c.crossings()) {
             Encounter e = Encounter.of(x, EPHEMERIS, from, to);
-            if (Math.abs(e.daysAfterEarth()) <= HIT_DAYS) {
+            if (Math.abs(e.daysAfterEarth()) <= HIT_DAYS && Math.abs(e.deltaR()) <= maxDeltaR) {
                 hit.put(x.id(), true);
                 w.put(x.id(), x.weight());
             }
@@ -123,27 +129,51 @@ class TargetedEjectionTest {
     }
 
     @Test
+    void aFocusOnDeltaRKeepsTheFractionNearAPointUnbiased() {
+        // The fraction that crosses near a fixed point: within 10 days of the Earth's passage and within
+        // DR of the Earth's orbit. The learned proposals carry a delta r model here (printed in the
+        // description), which aims at delta r = 0; the weighted estimate must still agree with plain sampling.
+        final double dr = 0.02;
+        ParticleGenerator g = generator();
+        double from = ParentReturns.yearStart(ParentReturns.yearOf(T + 2 * 3.2 * 365.25));
+        double to = from + 365.25 * 2;
+        TargetedEjection.Cloud plain = TargetedEjection.run(g, SUN_JUPITER, EPHEMERIS, from - 40, to + 40, from, to, 3000,
+                21L, false, 2, Progress.NONE, "plain");
+        TargetedEjection.Cloud targeted = TargetedEjection.run(g, SUN_JUPITER, EPHEMERIS, from - 40, to + 40, from, to,
+                3000, 22L, true, 2, Progress.NONE, "targeted");
+        assertThat(targeted.description()).contains("delta r within");
+        double[] a = estimate(plain, g, from, to, dr);
+        double[] b = estimate(targeted, g, from, to, dr);
+        System.out.printf(java.util.Locale.ROOT, "near a point: plain %.5f +- %.5f (%d), targeted %.5f +- %.5f (%d); %s%n",
+                a[0], a[1], (int) a[2], b[0], b[1], (int) b[2], targeted.description());
+        assertThat(a[2]).as("plain hits").isBetween(10.0, 1500.0);
+        assertThat(b[2]).as("targeted hits").isGreaterThan(3 * a[2]);
+        assertThat(b[1]).isLessThan(a[1]);
+        assertThat(Math.abs(a[0] - b[0])).as("plain %.5f +- %.5f, targeted %.5f +- %.5f", a[0], a[1], b[0], b[1])
+                .isLessThan(3 * Math.hypot(a[1], b[1]));
+    }
+
+    @Test
     void aProposalEqualToThePriorGivesWeightsOfOne() {
         ParticleGenerator g = generator();
         List<Meteoroid> plain = g.generate(600, 3L, false, 1);
-        List<Meteoroid> viaFocus = g.generate(600, 3L, false, 2, PeriodFocus.PRIOR, 0);
+        List<Meteoroid> viaFocus = g.generate(600, 3L, false, 2, EjectionFocus.PRIOR, 0);
         ImportanceWeights w = new ImportanceWeights(g)
-                .add(new ImportanceWeights.Stage(PeriodFocus.PRIOR, 0, 300, g.meanAcceptance(PeriodFocus.PRIOR, 10, 1), null))
-                .add(new ImportanceWeights.Stage(PeriodFocus.PRIOR, 300, 300, g.meanAcceptance(PeriodFocus.PRIOR, 10, 1), null));
+                .add(new ImportanceWeights.Stage(EjectionFocus.PRIOR, 0, 300, g.meanAcceptance(EjectionFocus.PRIOR, 10, 1), null))
+                .add(new ImportanceWeights.Stage(EjectionFocus.PRIOR, 300, 300, g.meanAcceptance(EjectionFocus.PRIOR, 10, 1), null));
         for (int k = 0; k < plain.size(); k++) {
             Meteoroid m = plain.get(k);
             assertThat(viaFocus.get(k).state()).isEqualTo(m.state());
-            double p0 = ParticleGenerator.periodAtEjection(m.state(), m.beta());
-            assertThat(w.importance(m.id(), p0)).isEqualTo(1.0);
+            assertThat(w.importance(m.id(), EjectionFocus.Features.of(m.state(), m.beta()))).isEqualTo(1.0);
         }
         // A learned focus stays within its floor and 1, and its weights Z/a are bounded by Z/floor.
         double[] p = plain.stream().mapToDouble(m -> ParticleGenerator.periodAtEjection(m.state(), m.beta())).toArray();
         double[] ones = new double[p.length];
         java.util.Arrays.fill(ones, 1.0);
-        PeriodFocus f = PeriodFocus.learn(java.util.Arrays.copyOf(p, 50), java.util.Arrays.copyOf(ones, 50), 3.0, 0.05);
+        EjectionFocus f = EjectionFocus.learn(java.util.Arrays.copyOf(p, 50), java.util.Arrays.copyOf(ones, 50), 3.0, 0.05);
         for (double x : p) {
-            assertThat(f.acceptance(x)).isBetween(0.05, 1.0);
+            assertThat(f.periodAcceptance(x)).isBetween(0.05, 1.0);
         }
-        assertThat(f.acceptance(Double.POSITIVE_INFINITY)).isEqualTo(0.05);
+        assertThat(f.periodAcceptance(Double.POSITIVE_INFINITY)).isEqualTo(0.05);
     }
 }
