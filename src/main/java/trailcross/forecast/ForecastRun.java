@@ -295,7 +295,6 @@ public final class ForecastRun {
                     checkpoint.write(ry, cloud.crossings(), axis);
                 }
             }
-            double gap = 3 * axisSpacing(axis, axisPeriod);
             double parentPeriod = Double.isFinite(period) ? period : p.elements().period();
             List<Meeting> meetings = new ArrayList<>();
             for (int y = 0; y + 1 < years.length; y++) {
@@ -306,9 +305,7 @@ public final class ForecastRun {
                 if (cloudMeeting != null && (cloudMeeting.peakT() < from || cloudMeeting.peakT() >= to)) {
                     cloudMeeting = null;
                 }
-                List<AxisMeeting.Root> roots = AxisMeeting.of(TrailAxis.points(axis, axisPeriod, ephemeris, from, to), gap);
-                AxisMeeting.Root root = roots.stream().filter(r -> r.peakT() >= from && r.peakT() < to)
-                        .filter(r -> Math.abs(r.deltaR()) < TrailPropagation.R_MAX - 1).findFirst().orElse(null);
+                AxisMeeting.Root root = TrailAxis.meeting(axis, axisPeriod, ephemeris, from, to);
                 if (cloudMeeting != null || (root != null && Math.abs(root.deltaR()) <= AXIS_MEETING_AU)) {
                     double peak = cloudMeeting != null ? cloudMeeting.peakT() : root.peakT();
                     meetings.add(new Meeting(s.firstYear() + y, ry, (int) Math.round((peak - p.t()) / parentPeriod),
@@ -362,19 +359,6 @@ public final class ForecastRun {
 
     /** An axis meeting farther from the Earth's path than this, without a cloud meeting, is not listed, au. */
     public static final double AXIS_MEETING_AU = 0.01;
-
-    /** The coarse family's spacing in period offset, days. */
-    private static double axisSpacing(List<NodeCrossing> axis, double parentPeriod) {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (NodeCrossing c : axis) {
-            if (c.id() < TrailAxis.COARSE) {
-                lo = Math.min(lo, c.initialPeriod() - parentPeriod);
-                hi = Math.max(hi, c.initialPeriod() - parentPeriod);
-            }
-        }
-        return hi > lo ? (hi - lo) / (TrailAxis.COARSE - 1) : 1;
-    }
 
     /**
      * @param stream a stream

@@ -16,7 +16,8 @@ import org.tomlj.TomlTable;
  * One validation case: a real body's stream file, what to compute (an Earth MOID, a perihelion return, a
  * forecast), the published values with their tolerances and the source. A small TOML file of keys
  * {@code name, stream} (relative to the case file){@code , command} ({@code moid}, {@code perihelion},
- * {@code forecast}){@code , quick, source}, the command's {@code year, since, particles, trail}, and
+ * {@code forecast}, {@code calibrate}, {@code axis}){@code , quick, source}, the command's {@code year, since,
+ * particles, trail}, for {@code axis} the period offsets scanned {@code offset_days = [lo, hi]}, and
  * {@code [[check]]} tables of {@code quantity, published, tolerance} (quantities: {@code moid_au},
  * {@code perihelion_tt}, {@code q_au}, {@code peak_utc} (tolerance in minutes), {@code abs_delta_r_au}
  * (the published value is the bound), {@code radiant} ({@code published = [ra, dec]}, tolerance in degrees),
@@ -35,16 +36,21 @@ import org.tomlj.TomlTable;
  * @param zhr the observed ZHR the calibration is fitted on (calibrate)
  * @param transferYear a year the calibrated stream is then forecast for (calibrate; 0: none)
  * @param transferTrail the trail checked in that year
+ * @param offsetDays the period offsets the trail's axis family spans, days ({@code axis}; null: ±{@value
+ *     #DEFAULT_OFFSET_DAYS})
  * @param checks the checks
  */
 public record ValidationCase(Path file, String name, Path stream, String command, boolean quick, String source,
         int year, int since, int particles, int trail, double zhr, int transferYear, int transferTrail,
-        List<Check> checks) {
+        double[] offsetDays, List<Check> checks) {
+
+    /** The period offsets an {@code axis} case spans by default, ± this many days. */
+    public static final double DEFAULT_OFFSET_DAYS = 600;
 
     /** The quantities a check can name. */
     public static final Set<String> QUANTITIES = Set.of("moid_au", "perihelion_tt", "q_au", "peak_utc",
             "abs_delta_r_au", "radiant", "solar_longitude_deg", "axis_delta_r_au", "axis_peak_utc", "peak_sigma_min",
-            "calibration_round_trip", "transfer_zhr_factor");
+            "calibration_round_trip", "transfer_zhr_factor", "axis_solar_longitude_deg");
 
     /**
      * One check.
@@ -81,9 +87,19 @@ public record ValidationCase(Path file, String name, Path stream, String command
             throw new IllegalArgumentException(file + ":" + line(t, "stream") + ": stream: no such file " + stream);
         }
         String command = text(file, t, "command");
-        if (!Set.of("moid", "perihelion", "forecast", "calibrate").contains(command)) {
+        if (!Set.of("moid", "perihelion", "forecast", "calibrate", "axis").contains(command)) {
             throw new IllegalArgumentException(file + ":" + line(t, "command") + ": command: '" + command
-                    + "' is not moid, perihelion, forecast or calibrate");
+                    + "' is not moid, perihelion, forecast, calibrate or axis");
+        }
+        double[] offsets = null;
+        if (t.contains("offset_days")) {
+            TomlArray o = t.isArray("offset_days") ? t.getArray("offset_days") : null;
+            if (o == null || o.size() != 2 || !(o.get(0) instanceof Number) || !(o.get(1) instanceof Number)
+                    || ((Number) o.get(0)).doubleValue() >= ((Number) o.get(1)).doubleValue()) {
+                throw new IllegalArgumentException(file + ":" + line(t, "offset_days")
+                        + ": offset_days: must be [lo, hi] in days with lo < hi");
+            }
+            offsets = new double[] {((Number) o.get(0)).doubleValue(), ((Number) o.get(1)).doubleValue()};
         }
         TomlArray arr = t.getArray("check");
         if (arr == null || arr.isEmpty()) {
@@ -112,7 +128,7 @@ public record ValidationCase(Path file, String name, Path stream, String command
         return new ValidationCase(file, name, stream, command, Boolean.TRUE.equals(t.getBoolean("quick")),
                 text(file, t, "source"), intOf(t, "year"), intOf(t, "since"), intOf(t, "particles"), intOf(t, "trail"),
                 t.getDouble("zhr") == null ? Double.NaN : t.getDouble("zhr"), intOf(t, "transfer_year"),
-                intOf(t, "transfer_trail"), checks);
+                intOf(t, "transfer_trail"), offsets, checks);
     }
 
     private static String text(Path file, TomlParseResult t, String key) {

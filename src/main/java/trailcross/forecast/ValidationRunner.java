@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.Consumer;
 import trailcross.dynamics.Perihelion;
+import trailcross.encounter.AxisMeeting;
 import trailcross.encounter.EarthOrbit;
 import trailcross.encounter.TrailEncounter;
 import trailcross.ephemeris.Ephemeris;
@@ -111,6 +112,23 @@ public final class ValidationRunner {
                     }
                 }
             }
+            case "axis" -> {
+                AxisMeeting.Root root = axisMeeting(c, d, ephemeris);
+                for (ValidationCase.Check k : c.checks()) {
+                    if (root == null) {
+                        out.add(new Outcome(k.quantity(), "(the axis does not meet the Earth)", String.valueOf(k.published()),
+                                "", false));
+                        continue;
+                    }
+                    out.add(switch (k.quantity()) {
+                        case "axis_peak_utc" -> time(k, root.peakT(), root.sigmaMin());
+                        case "axis_delta_r_au" -> number(k, root.deltaR(), "%+.5f", "au");
+                        case "axis_solar_longitude_deg" -> number(k, root.solarLongitudeDeg(), "%.4f", "deg");
+                        default -> throw new IllegalArgumentException(c.file() + ": " + k.quantity()
+                                + " is not an axis quantity (axis_peak_utc, axis_delta_r_au, axis_solar_longitude_deg)");
+                    });
+                }
+            }
             default -> {
                 ForecastRun.Result r = ForecastRun.run(d, ephemeris, settings(c, c.year()), log);
                 ForecastRun.Meeting mt = r.meetings().stream().filter(t -> t.returnYear() == c.trail()).findFirst()
@@ -127,16 +145,8 @@ public final class ValidationRunner {
                         continue;
                     }
                     out.add(switch (k.quantity()) {
-                        case "peak_utc", "axis_peak_utc" -> {
-                            boolean axis = k.quantity().startsWith("axis");
-                            double t = axis ? mt.axis().peakT() : m.peakT();
-                            double sigma = axis ? mt.axis().sigmaMin() : m.peakSigmaMin();
-                            double pub = EpochParser.parse((String) k.published()).daysSinceJ2000();
-                            double min = (t - pub) * 1440;
-                            yield new Outcome(k.quantity(), EpochFormat.utc(Epoch.ofDaysSinceJ2000(t), 0)
-                                    + String.format(Locale.ROOT, " ± %.1f min", sigma), (String) k.published(),
-                                    String.format(Locale.ROOT, "%+.0f min", min), Math.abs(min) <= k.tolerance());
-                        }
+                        case "peak_utc" -> time(k, m.peakT(), m.peakSigmaMin());
+                        case "axis_peak_utc" -> time(k, mt.axis().peakT(), mt.axis().sigmaMin());
                         case "peak_sigma_min" -> {
                             double bound = (Double) k.published();
                             yield new Outcome(k.quantity(), String.format(Locale.ROOT, "%.1f min", m.peakSigmaMin()),
@@ -164,6 +174,32 @@ public final class ValidationRunner {
             }
         }
         return out;
+    }
+
+    /**
+     * The trail's axis alone (no cloud): the parent integrated from the trail's return to the case's year, the
+     * family spanning the case's period offsets, its meeting with the Earth in that year ({@link TrailAxis}).
+     */
+    private static AxisMeeting.Root axisMeeting(ValidationCase c, StreamDefinition d, Ephemeris ephemeris) {
+        ParentReturns.Result r = ParentReturns.compute(d.parent(), ephemeris, c.trail(), c.year());
+        Perihelion p = r.returns().stream().filter(x -> ParentReturns.yearOf(x.t()) == c.trail()).findFirst()
+                .orElseThrow(() -> new IllegalArgumentException(c.file() + ": no perihelion in " + c.trail()));
+        double[] years = {ParentReturns.yearStart(c.year()), ParentReturns.yearStart(c.year() + 1)};
+        double[] span = c.offsetDays() != null ? c.offsetDays()
+                : new double[] {-ValidationCase.DEFAULT_OFFSET_DAYS, ValidationCase.DEFAULT_OFFSET_DAYS};
+        List<trailcross.encounter.NodeCrossing> axis = TrailAxis.compute(p, span[0], span[1], ephemeris,
+                years[0] - ForecastRun.EDGE_DAYS, years[1] + ForecastRun.EDGE_DAYS, years,
+                Runtime.getRuntime().availableProcessors());
+        return TrailAxis.meeting(axis, TrailAxis.parentPeriod(p), ephemeris, years[0], years[1]);
+    }
+
+    /** A computed time (UTC) against a published one, the tolerance in minutes. */
+    private static Outcome time(ValidationCase.Check k, double t, double sigmaMin) {
+        double pub = EpochParser.parse((String) k.published()).daysSinceJ2000();
+        double min = (t - pub) * 1440;
+        return new Outcome(k.quantity(), EpochFormat.utc(Epoch.ofDaysSinceJ2000(t), 0)
+                + String.format(Locale.ROOT, " ± %.1f min", sigmaMin), (String) k.published(),
+                String.format(Locale.ROOT, "%+.0f min", min), Math.abs(min) <= k.tolerance());
     }
 
     /**

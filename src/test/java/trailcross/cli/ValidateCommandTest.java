@@ -18,7 +18,7 @@ class ValidateCommandTest {
     void quickCasesPass() {
         MainTest.Run r = MainTest.run("validate", "--quick");
         assertThat(r.code()).as(r.out() + r.err()).isZero();
-        assertThat(r.out()).contains("moid_au").contains("perihelion_tt").contains("calibration_round_trip")
+        assertThat(r.out()).contains("moid_au").contains("perihelion_tt").contains("calibration_round_trip").contains("axis_peak_utc")
                 .contains("0 check(s) failed");
     }
 
@@ -35,6 +35,6 @@ class ValidateCommandTest {
                 + "\"\ncommand = \"orbit\"\nsource = \"x\"\n");
         MainTest.Run b = MainTest.run("validate", "--dir", dir.toString());
         assertThat(b.code()).isEqualTo(Main.BAD_INPUT);
-        assertThat(b.err()).contains("wrong.toml:3: command: 'orbit' is not moid, perihelion, forecast or calibrate");
+        assertThat(b.err()).contains("wrong.toml:3: command: 'orbit' is not moid, perihelion, forecast, calibrate or axis");
     }
 }
