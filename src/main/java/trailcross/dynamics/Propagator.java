@@ -57,6 +57,11 @@ public final class Propagator {
      */
     public List<Outcome> propagate(List<TestParticle> particles, double tEnd, StepHandlerFactory handlers,
             LongConsumer progress) {
+        if (forces.planets()) {
+            // Up front, not when the integration reaches the ephemeris' end: a run past it would otherwise
+            // integrate (and fit the cache) up to there before it fails.
+            forces.ephemeris().checkSpan(tEnd);
+        }
         ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
             Thread t = new Thread(r, "trailcross-propagate");
             t.setDaemon(true);

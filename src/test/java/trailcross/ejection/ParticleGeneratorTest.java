@@ -17,7 +17,6 @@ import trailcross.dynamics.Perihelion;
 import trailcross.dynamics.Propagator;
 import trailcross.ephemeris.Body;
 import trailcross.ephemeris.ChebyshevCache;
-import trailcross.ephemeris.Vsop87Ephemeris;
 import trailcross.orbit.Elements;
 import trailcross.orbit.StateVector;
 import trailcross.stream.DirectionLaw;
@@ -36,7 +35,7 @@ import trailcross.time.Epoch;
  */
 class ParticleGeneratorTest {
 
-    private static final ChebyshevCache EPHEMERIS = new ChebyshevCache(new Vsop87Ephemeris());
+    private static final ChebyshevCache EPHEMERIS = (ChebyshevCache) trailcross.ephemeris.Ephemerides.fast(null);
     private static final ForceModelFactory TWO_BODY = new ForceModelFactory(EPHEMERIS, false, false);
     private static final double GM = Body.SUN.gm();
     /** Perihelion 2030-01-01 TDB, days since J2000. */

@@ -11,12 +11,11 @@ import org.junit.jupiter.api.io.TempDir;
 import trailcross.ephemeris.Body;
 import trailcross.ephemeris.ChebyshevCache;
 import trailcross.ephemeris.Ephemeris;
-import trailcross.ephemeris.Vsop87Ephemeris;
 
 /** The approach targets: the Sun–Earth L1/L2 points and a track read from a file. */
 class ApproachTargetsTest {
 
-    private static final Ephemeris EPHEMERIS = new ChebyshevCache(new Vsop87Ephemeris());
+    private static final Ephemeris EPHEMERIS = (ChebyshevCache) trailcross.ephemeris.Ephemerides.fast(null);
 
     @TempDir
     Path dir;

@@ -11,7 +11,6 @@ import trailcross.dynamics.ForceModelFactory;
 import trailcross.dynamics.GaussRadau15;
 import trailcross.ephemeris.Body;
 import trailcross.ephemeris.ChebyshevCache;
-import trailcross.ephemeris.Vsop87Ephemeris;
 import trailcross.frames.EclipticFrame;
 import trailcross.frames.SolarLongitude;
 import trailcross.orbit.Elements;
@@ -19,7 +18,7 @@ import trailcross.orbit.Elements;
 /** Node crossings and the quantities read from them, against direct geometric constructions. */
 class EncounterTest {
 
-    private static final ChebyshevCache EPHEMERIS = new ChebyshevCache(new Vsop87Ephemeris());
+    private static final ChebyshevCache EPHEMERIS = (ChebyshevCache) trailcross.ephemeris.Ephemerides.fast(null);
     private static final double KM_S = 86400 / Body.Constants.AU_KM;
 
     @Test

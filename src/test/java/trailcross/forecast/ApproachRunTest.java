@@ -22,7 +22,6 @@ import trailcross.encounter.TrackTarget;
 import trailcross.ephemeris.Body;
 import trailcross.ephemeris.ChebyshevCache;
 import trailcross.ephemeris.Ephemeris;
-import trailcross.ephemeris.Vsop87Ephemeris;
 import trailcross.stream.StreamDefinition;
 import trailcross.stream.StreamFileReader;
 import trailcross.time.EpochParser;
@@ -30,7 +29,7 @@ import trailcross.time.EpochParser;
 /** The approach run against independent integrations and known geometry. */
 class ApproachRunTest {
 
-    private static final Ephemeris EPHEMERIS = new ChebyshevCache(new Vsop87Ephemeris());
+    private static final Ephemeris EPHEMERIS = (ChebyshevCache) trailcross.ephemeris.Ephemerides.fast(null);
 
     @TempDir
     Path dir;

@@ -18,7 +18,6 @@ import trailcross.encounter.Encounter;
 import trailcross.encounter.NodeCrossing;
 import trailcross.ephemeris.Body;
 import trailcross.ephemeris.ChebyshevCache;
-import trailcross.ephemeris.Vsop87Ephemeris;
 import trailcross.orbit.Elements;
 import trailcross.stream.DirectionLaw;
 import trailcross.stream.EjectionSettings;
@@ -39,7 +38,7 @@ import trailcross.time.Epoch;
  */
 class TargetedEjectionTest {
 
-    private static final ChebyshevCache EPHEMERIS = new ChebyshevCache(new Vsop87Ephemeris());
+    private static final ChebyshevCache EPHEMERIS = (ChebyshevCache) trailcross.ephemeris.Ephemerides.fast(null);
     private static final ForceModelFactory SUN_JUPITER = ForceModelFactory.sunAnd(EPHEMERIS, Body.JUPITER);
     private static final double T = 10958.0;
     private static final double HIT_DAYS = 10;
