@@ -119,6 +119,32 @@ class EncounterTest {
     }
 
     @Test
+    void fmIsNotFlattenedByTheSectionsWindowInNodeTime() {
+        // A trail three revolutions old (fM = 1/3) whose node times also scatter by 10 days with the other
+        // ejection variables; the section keeps node passages within 10 days of the Earth, as TrailEncounter
+        // chooses it. Fitting node time on P0 inside that window flattens the slope (fM came out near 1);
+        // P0 on node time does not.
+        Well19937c rng = new Well19937c(7);
+        double tE = 7261.6;
+        double p = 33.2 * 365.25;
+        List<Encounter> list = new ArrayList<>();
+        for (int k = 0; list.size() < 3000; k++) {
+            double p0 = p + 40 * (rng.nextDouble() - 0.5);
+            double t = tE + 3 * (p0 - p) + 10 * rng.nextGaussian();
+            if (Math.abs(t - tE) > 10) {
+                continue;
+            }
+            double dr = -0.0005 + 0.0003 * rng.nextGaussian();
+            double lambda = 235.30 + 0.01 * rng.nextGaussian();
+            NodeCrossing c = new NodeCrossing(k, tE - 8 * p - 3, 1e9, 1e-5, p0, t,
+                    new double[] {0.9886 + dr, 0, 0, 0, 0, 0.01}, false);
+            list.add(new Encounter(c, tE, dr, lambda, t - tE, new GeocentricRadiant(153.6, 21.8, 71.0, lambda)));
+        }
+        TrailEncounter te = TrailEncounter.of(list, p, 2.5, EPHEMERIS);
+        assertThat(te.fM()).isCloseTo(1.0 / 3, within(0.02));
+    }
+
+    @Test
     void densityPeakOfASyntheticCloudIsItsModeWithAnHonestUncertainty() {
         double p = 33.2 * 365.25;
         TrailEncounter t = TrailEncounter.of(section(99, 1500), p, 2.5, EPHEMERIS);
