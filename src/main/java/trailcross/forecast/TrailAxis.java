@@ -113,7 +113,7 @@ public final class TrailAxis {
     /**
      * A root whose spline and linear interpolations differ by more than this is not resolved by the family,
      * minutes: measured on the 1767 Leonid trail in 2002, a scattered stretch of the family (node time moving
-     * 200 days per day of offset after a close planetary encounter) gave a spurious root 0.00004 au from the
+     * 200 days per day of offset) gave a spurious root 0.00004 au from the
      * Earth's path with 85 minutes between the two interpolations, while the trail's real meeting (resolved to
      * 0.1 min) lay 0.00012 au away.
      */
