@@ -236,7 +236,12 @@ public record EjectionFocus(double lo, double step, double[] values, double floo
      * @return the probability that it is kept
      */
     public double acceptance(double[] state, double beta) {
-        return floor == 1 ? 1 : acceptance(Features.of(state, beta));
+        if (floor == 1) {
+            return 1;
+        }
+        // A focus in P0 alone needs only the period: no node distances, no record, per candidate drawn.
+        return node == null ? periodAcceptance(ParticleGenerator.periodAtEjection(state, beta))
+                : acceptance(Features.of(state, beta));
     }
 
     /**

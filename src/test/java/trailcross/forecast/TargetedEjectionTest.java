@@ -106,17 +106,27 @@ class TargetedEjectionTest {
         return new double[] {f, Math.sqrt(var), hit.size()};
     }
 
-    @Test
-    void weightedFractionNearTheEarthAgreesWithPlainSampling() {
+    /** A plain and a targeted cloud of the Sun + Jupiter case, 3000 particles each, over the same two years. */
+    private record Pair(ParticleGenerator g, double from, double to, TargetedEjection.Cloud plain,
+            TargetedEjection.Cloud targeted) {
+    }
+
+    private static Pair pair(long plainSeed, long targetedSeed) {
         ParticleGenerator g = generator();
         double from = ParentReturns.yearStart(ParentReturns.yearOf(T + 2 * 3.2 * 365.25));
         double to = from + 365.25 * 2;
-        TargetedEjection.Cloud plain = TargetedEjection.run(g, SUN_JUPITER, EPHEMERIS, from - 40, to + 40, from, to, 3000,
-                11L, false, 2, Progress.NONE, "plain");
-        TargetedEjection.Cloud targeted = TargetedEjection.run(g, SUN_JUPITER, EPHEMERIS, from - 40, to + 40, from, to,
-                3000, 12L, true, 2, Progress.NONE, "targeted");
-        double[] a = estimate(plain, g, from, to);
-        double[] b = estimate(targeted, g, from, to);
+        return new Pair(g, from, to,
+                TargetedEjection.run(g, SUN_JUPITER, EPHEMERIS, from - 40, to + 40, from, to, 3000, plainSeed, false, 2,
+                        Progress.NONE, "plain"),
+                TargetedEjection.run(g, SUN_JUPITER, EPHEMERIS, from - 40, to + 40, from, to, 3000, targetedSeed, true, 2,
+                        Progress.NONE, "targeted"));
+    }
+
+    @Test
+    void weightedFractionNearTheEarthAgreesWithPlainSampling() {
+        Pair r = pair(11L, 12L);
+        double[] a = estimate(r.plain(), r.g(), r.from(), r.to());
+        double[] b = estimate(r.targeted(), r.g(), r.from(), r.to());
         // A case worth the name: plain sampling finds some tens of hits, a few per cent of the cloud.
         assertThat(a[2]).as("plain hits").isBetween(20.0, 1500.0);
         // Targeting puts more particles there and so estimates the same fraction more precisely...
@@ -133,16 +143,11 @@ class TargetedEjectionTest {
         // DR of the Earth's orbit. The learned proposals carry a delta r model here (printed in the
         // description), which aims at delta r = 0; the weighted estimate must still agree with plain sampling.
         final double dr = 0.02;
-        ParticleGenerator g = generator();
-        double from = ParentReturns.yearStart(ParentReturns.yearOf(T + 2 * 3.2 * 365.25));
-        double to = from + 365.25 * 2;
-        TargetedEjection.Cloud plain = TargetedEjection.run(g, SUN_JUPITER, EPHEMERIS, from - 40, to + 40, from, to, 3000,
-                21L, false, 2, Progress.NONE, "plain");
-        TargetedEjection.Cloud targeted = TargetedEjection.run(g, SUN_JUPITER, EPHEMERIS, from - 40, to + 40, from, to,
-                3000, 22L, true, 2, Progress.NONE, "targeted");
+        Pair r = pair(21L, 22L);
+        TargetedEjection.Cloud targeted = r.targeted();
         assertThat(targeted.description()).contains("delta r within");
-        double[] a = estimate(plain, g, from, to, dr);
-        double[] b = estimate(targeted, g, from, to, dr);
+        double[] a = estimate(r.plain(), r.g(), r.from(), r.to(), dr);
+        double[] b = estimate(targeted, r.g(), r.from(), r.to(), dr);
         System.out.printf(java.util.Locale.ROOT, "near a point: plain %.5f +- %.5f (%d), targeted %.5f +- %.5f (%d); %s%n",
                 a[0], a[1], (int) a[2], b[0], b[1], (int) b[2], targeted.description());
         assertThat(a[2]).as("plain hits").isBetween(10.0, 1500.0);
