@@ -147,6 +147,43 @@ public final class DensityProfile {
     }
 
     /**
+     * The smoothing bias of the profile's value at one longitude, by Richardson's extrapolation in the
+     * bandwidths: a second-order kernel's estimate has bias c·h² + O(h⁴) (Silverman 1986, sec. 4.3.1), so the
+     * estimates with bandwidths (h_r, h_λ) and (h_r, h_λ)/√2 differ by c·h²/2 and the bias at h is twice that
+     * difference. The difference carries the noise of the narrower estimate too; it is returned whole, not
+     * with its noise subtracted, because subtracting made the estimate zero in runs whose true bias was large
+     * (on a sharp core inside a broad halo, 2-σ intervals then held the truth in 34 runs of 40 instead of 39).
+     * The bootstrap σ of the profile's maximum does not contain this term: without it the stated uncertainty
+     * of a peak value shrinks with the particle count faster than its error does (a bandwidth set on a whole
+     * section flattens its sharp core).
+     *
+     * @param deltaR the crossings' delta r, au
+     * @param lambda their longitudes, degrees
+     * @param value what each crossing adds to the profile
+     * @param hR the profile's bandwidth in delta r, au
+     * @param hLambda its bandwidth in longitude, degrees
+     * @param at the longitude, degrees
+     * @return the estimated magnitude of the bias at {@code at}, in the profile's units (≥ 0; its own noise
+     *         included, so it errs on the large side)
+     */
+    public static double smoothingBias(double[] deltaR, double[] lambda, double[] value, double hR, double hLambda,
+            double at) {
+        double h2r = hR / Math.sqrt(2);
+        double h2l = hLambda / Math.sqrt(2);
+        double total = 0;
+        for (int i = 0; i < deltaR.length; i++) {
+            total += value[i] * (gauss(deltaR[i], hR) * gauss(lambda[i] - at, hLambda)
+                    - gauss(deltaR[i], h2r) * gauss(lambda[i] - at, h2l));
+        }
+        return Math.abs(2 * total);
+    }
+
+    private static double gauss(double x, double h) {
+        double z = x / h;
+        return Math.exp(-0.5 * z * z) / (h * Math.sqrt(2 * Math.PI));
+    }
+
+    /**
      * Silverman's rule of thumb on weighted data, 0.9 min(σ, IQR/1.34) n_eff^−1/5.
      *
      * @param x the data

@@ -22,7 +22,7 @@ import trailcross.frames.Angles;
  * meteor from Jacchia, Verniani &amp; Briggs (1967), M = 55.34 − 8.75 log V − 2.25 log m (V cm/s, m g, zenith;
  * from memory);</li>
  * <li>peak: the profile's maximum, its uncertainty from resampling; FWHM from the profile; ZHR at the peak
- * with its resampling uncertainty (relative to the run's strongest meeting when the stream gives no dust
+ * with its resampling uncertainty and the kernel's smoothing bias there in quadrature (relative to the run's strongest meeting when the stream gives no dust
  * production);</li>
  * <li>delta r: the weighted median of the crossings at the peak longitude (weights × the longitude kernel);
  * the radiant and Vg: their weighted mean;</li>
@@ -49,14 +49,17 @@ import trailcross.frames.Angles;
  * @param vgKmS Vg, km/s
  * @param fwhmHours FWHM of the activity profile, hours
  * @param fM the along-trail density factor
+ * @param fMSigma its 1-σ uncertainty: the least-squares slope's standard error (NaN with fewer than three
+ *        crossings on the branch)
  * @param zhr the ZHR at the peak (for the weights given)
- * @param zhrSigma its 1-σ resampling uncertainty
+ * @param zhrSigma its 1-σ uncertainty: the resampling σ and the kernel's smoothing bias at the peak
+ *        ({@link DensityProfile#smoothingBias}) in quadrature
  * @param ess Kish's effective sample size of the crossings behind the profile
  * @param profile the activity profile in ZHR against solar longitude
  */
 public record TrailEncounter(double returnT, int revolutions, double peakT, double peakSigmaMin,
         double solarLongitudeDeg, double deltaR, double deltaRSigma, int particles, double raDeg, double decDeg, double vgKmS,
-        double fwhmHours, double fM, double zhr, double zhrSigma, double ess, DensityProfile.Result profile) {
+        double fwhmHours, double fM, double fMSigma, double zhr, double zhrSigma, double ess, DensityProfile.Result profile) {
 
     /** Along-trail half-window: crossings this many days before or after the Earth, days. */
     public static final double ALONG_TRAIL_DAYS = 10.0;
@@ -141,6 +144,9 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
                     prof.fwhm(), prof.ess());
         }
         double peakLon = prof.peak();
+        // The ZHR's uncertainty: the bootstrap σ of the maximum and, in quadrature, the kernel's smoothing bias
+        // there (a sharp core is flattened by a bandwidth set on the whole section).
+        double bias = DensityProfile.smoothingBias(dr, lon, zhrValue, prof.hR(), prof.hLambda(), peakLon);
         double peakT = EarthLongitude.time(ephemeris, Math.toRadians(peakLon + 180), met.get(0).earthT());
         // The crossings at the peak: weights times the longitude kernel.
         double[] atPeak = new double[n];
@@ -191,10 +197,13 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
             }
         }
         double fM = Math.abs(tp.getSlope());
+        // The slope's standard error from the residuals about the fitted line (n − 2 degrees of freedom).
+        double fMSigma = tp.getN() > 2 ? tp.getSlopeStdErr() : Double.NaN;
         int revolutions = (int) Math.round((peakT - returnT) / parentPeriodDays);
         return new TrailEncounter(returnT, revolutions, peakT, prof.peakSigma() * HOURS_PER_DEGREE * 60,
                 Angles.normaliseDeg(peakLon), deltaR, deltaRSigma, n, raDeg, decDeg, vg, prof.fwhm() * HOURS_PER_DEGREE, fM,
-                prof.peakValue(), prof.peakValueSigma(), prof.ess(), prof);
+                fMSigma,
+                prof.peakValue(), Math.hypot(prof.peakValueSigma(), bias), prof.ess(), prof);
     }
 
     /**

@@ -33,8 +33,8 @@ public final class ForecastTable {
         String years = s.span() ? s.firstYear() + "-" + s.lastYear() : Integer.toString(s.firstYear());
         o.printf(Locale.ROOT, "%s in %s: %d meeting(s) with the Earth (%s sampling)%n", streamName, years,
                 r.meetings().size(), s.targeted() ? "targeted" : "plain");
-        o.printf(Locale.ROOT, "%-4s %-5s %3s %-27s %9s %9s %9s %6s %6s %-15s %6s %-17s%n", "year", "trail", "rev",
-                "peak UTC +- sigma", "sol.long", "dr cloud", "dr axis", "fM", "FWHM", r.absolute() ? "ZHR +- sigma"
+        o.printf(Locale.ROOT, "%-4s %-5s %3s %-27s %9s %9s %9s %-13s %6s %-15s %6s %-17s%n", "year", "trail", "rev",
+                "peak UTC +- sigma", "sol.long", "dr cloud", "dr axis", "fM +- sigma", "FWHM", r.absolute() ? "ZHR +- sigma"
                         : "rel. intensity", "ESS", "axis peak UTC");
         for (ForecastRun.Meeting mt : r.meetings()) {
             TrailEncounter m = mt.cloud();
@@ -44,13 +44,14 @@ public final class ForecastTable {
             String intensity = m == null ? "-" : r.absolute() ? String.format(Locale.ROOT, "%.0f +- %.0f", m.zhr(),
                     m.zhrSigma()) : String.format(Locale.ROOT, "%.3f +- %.3f", r.relativeIntensity(mt),
                     m.zhr() > 0 ? r.relativeIntensity(mt) * m.zhrSigma() / m.zhr() : 0);
-            o.printf(Locale.ROOT, "%-4d %-5d %3d %-27s %9.4f %9s %9s %6s %6s %-15s %6s %-17s%n", mt.year(),
+            o.printf(Locale.ROOT, "%-4d %-5d %3d %-27s %9.4f %9s %9s %-13s %6s %-15s %6s %-17s%n", mt.year(),
                     mt.returnYear(), mt.revolutions(), peak,
                     m != null ? m.solarLongitudeDeg() : a.solarLongitudeDeg(),
                     m == null ? "-" : String.format(Locale.ROOT, "%+.5f", m.deltaR()),
                     a == null ? "-" : String.format(Locale.ROOT, "%+.5f", a.deltaR()),
                     m == null ? (a == null ? "-" : String.format(Locale.ROOT, "%.3f", a.fM()))
-                            : String.format(Locale.ROOT, "%.3f", m.fM()),
+                            : Double.isNaN(m.fMSigma()) ? String.format(Locale.ROOT, "%.3f", m.fM())
+                            : String.format(Locale.ROOT, "%.3f +- %.3f", m.fM(), m.fMSigma()),
                     m == null ? "-" : String.format(Locale.ROOT, "%.2fh", m.fwhmHours()), intensity,
                     m == null ? "-" : String.format(Locale.ROOT, "%.0f", m.ess()),
                     a == null ? "-" : minute(a.peakT()));

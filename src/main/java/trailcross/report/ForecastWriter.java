@@ -51,7 +51,7 @@ public final class ForecastWriter {
             List<String> header = new ArrayList<>(List.of("return_year", "revolutions", "peak_utc", "solar_longitude_deg",
                     "delta_r_au", "particles", "ra_deg", "dec_deg", "vg_km_s", "fwhm_h", "zhr", "peak_sigma_min",
                     "axis_peak_utc", "axis_delta_r_au", "fm", "ess", "zhr_sigma", "relative_intensity", "axis_fm",
-                    "axis_solar_longitude_deg", "axis_sigma_min", "times_disagree", "delta_r_sigma_au"));
+                    "axis_solar_longitude_deg", "axis_sigma_min", "times_disagree", "delta_r_sigma_au", "fm_sigma"));
             if (span) {
                 header.add(0, "year");
             }
@@ -84,6 +84,7 @@ public final class ForecastWriter {
                     row.add(a == null ? "" : f(a.sigmaMin(), 1));
                     row.add(mt.timesDisagree());
                     row.add(m == null || Double.isNaN(m.deltaRSigma()) ? "" : f(m.deltaRSigma(), 6));
+                    row.add(m == null || Double.isNaN(m.fMSigma()) ? "" : f(m.fMSigma(), 4));
                     p.printRecord(row);
                 }
             }
@@ -155,12 +156,13 @@ public final class ForecastWriter {
                 TrailEncounter m = mt.cloud();
                 items.add(String.format(Locale.ROOT, "    {\"year\": %d, \"return_year\": %d, \"ess\": %s, \"peak_utc\": %s, "
                         + "\"peak_sigma_min\": %s, \"delta_r_au\": %s, \"delta_r_sigma_au\": %s, \"axis_peak_utc\": %s, "
-                        + "\"axis_delta_r_au\": %s}", mt.year(),
+                        + "\"axis_delta_r_au\": %s, \"fm\": %s, \"fm_sigma\": %s}", mt.year(),
                         mt.returnYear(), m == null ? "null" : f(m.ess(), 1), json(utc(mt.peakT())),
                         m == null ? "null" : f(m.peakSigmaMin(), 1), m == null ? "null" : f(m.deltaR(), 6),
                         m == null || Double.isNaN(m.deltaRSigma()) ? "null" : f(m.deltaRSigma(), 6),
                         mt.axis() == null ? "null" : json(utc(mt.axis().peakT())),
-                        mt.axis() == null ? "null" : f(mt.axis().deltaR(), 6)));
+                        mt.axis() == null ? "null" : f(mt.axis().deltaR(), 6), m == null ? "null" : f(m.fM(), 4),
+                        m == null || Double.isNaN(m.fMSigma()) ? "null" : f(m.fMSigma(), 4)));
             }
             w.write(String.join(",\n", items));
             w.write(items.isEmpty() ? "  ],\n" : "\n  ],\n");

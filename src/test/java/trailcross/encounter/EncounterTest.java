@@ -145,6 +145,42 @@ class EncounterTest {
     }
 
     @Test
+    void fmUncertaintyMatchesTheScatterOfIndependentSections() {
+        // Twenty independent sections of the same synthetic trail (fM = 1/3, node times scattered 10 days by the
+        // other ejection variables): the stated σ of fM must match the spread of fM from section to section.
+        double tE = 7261.6;
+        double p = 33.2 * 365.25;
+        int runs = 20;
+        double[] fm = new double[runs];
+        double meanSigma = 0;
+        for (int s = 0; s < runs; s++) {
+            Well19937c rng = new Well19937c(100 + s);
+            List<Encounter> list = new ArrayList<>();
+            for (int k = 0; list.size() < 300; k++) {
+                double p0 = p + 40 * (rng.nextDouble() - 0.5);
+                double t = tE + 3 * (p0 - p) + 10 * rng.nextGaussian();
+                if (Math.abs(t - tE) > 10) {
+                    continue;
+                }
+                double dr = -0.0005 + 0.0003 * rng.nextGaussian();
+                double lambda = 235.30 + 0.01 * rng.nextGaussian();
+                NodeCrossing c = new NodeCrossing(k, tE - 8 * p - 3, 1e9, 1e-5, p0, t,
+                        new double[] {0.9886 + dr, 0, 0, 0, 0, 0.01}, false);
+                list.add(new Encounter(c, tE, dr, lambda, t - tE, new GeocentricRadiant(153.6, 21.8, 71.0, lambda)));
+            }
+            TrailEncounter te = TrailEncounter.of(list, p, 2.5, EPHEMERIS);
+            fm[s] = te.fM();
+            meanSigma += te.fMSigma() / runs;
+        }
+        double mean = java.util.Arrays.stream(fm).average().orElseThrow();
+        double sd = Math.sqrt(java.util.Arrays.stream(fm).map(x -> (x - mean) * (x - mean)).sum() / (runs - 1));
+        assertThat(mean).isCloseTo(1.0 / 3, within(3 * sd / Math.sqrt(runs) + 0.005));
+        // The sample sd of 20 values is itself uncertain by about 16%: a factor 1.6 either way fails only when the
+        // stated σ is wrong.
+        assertThat(meanSigma).isBetween(sd / 1.6, sd * 1.6);
+    }
+
+    @Test
     void densityPeakOfASyntheticCloudIsItsModeWithAnHonestUncertainty() {
         double p = 33.2 * 365.25;
         TrailEncounter t = TrailEncounter.of(section(99, 1500), p, 2.5, EPHEMERIS);
