@@ -40,13 +40,14 @@ class ForecastCommandTest {
         assertThat(row[12]).startsWith("2027-06-");
         assertThat(Double.parseDouble(row[15])).isGreaterThan(1);
         assertThat(Double.parseDouble(row[16])).isPositive();
-        // The cloud's delta r comes with its bootstrap uncertainty (last column).
-        assertThat(enc.get(0)).endsWith(",times_disagree,delta_r_sigma_au");
-        assertThat(Double.parseDouble(row[row.length - 1])).isPositive().isLessThan(0.01);
+        // The cloud's delta r comes with its bootstrap uncertainty, fM with its standard error (last columns).
+        assertThat(enc.get(0)).endsWith(",times_disagree,delta_r_sigma_au,fm_sigma");
+        assertThat(Double.parseDouble(row[row.length - 2])).isPositive().isLessThan(0.01);
+        assertThat(Double.parseDouble(row[row.length - 1])).isPositive().isLessThan(Double.parseDouble(row[14]));
         assertThat(Files.readAllLines(dir.resolve("crossings.csv")).size()).isGreaterThan(10);
         assertThat(Files.readString(dir.resolve("radiants.csv"))).startsWith("date_utc,solar_longitude_deg,ra_deg,dec_deg,vg_km_s\n2027-");
         assertThat(Files.readString(dir.resolve("summary.json"))).contains("\"seed\": 1").contains("\"caution\"")
-                .contains("\"ess\": ").contains("\"run_seconds\": ").contains("\"delta_r_sigma_au\": ");
+                .contains("\"ess\": ").contains("\"run_seconds\": ").contains("\"delta_r_sigma_au\": ").contains("\"fm_sigma\": ");
         for (String png : new String[] {"node-map.png", "activity.png", "radiants.png"}) {
             byte[] b = Files.readAllBytes(dir.resolve(png));
             assertThat(b.length).as(png).isGreaterThan(5000);
