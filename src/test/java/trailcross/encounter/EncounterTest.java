@@ -181,6 +181,34 @@ class EncounterTest {
     }
 
     @Test
+    void fmSlopeWeighsTheParticlesSoThatTheProposalDoesNotMoveIt() {
+        // A trail section whose node time bends with the period offset x (t = 3x + 0.15x², days), drawn from
+        // a proposal that puts 80% of the particles on x in [5, 15] and the rest on the prior, uniform on
+        // [−20, 20], with importance weights prior/proposal. The weighted slope must give the prior's slope
+        // (from a large plain sample) within its bootstrap σ; the unweighted slope, the proposal's, must not.
+        Well19937c rng = new Well19937c(21);
+        List<double[]> plain = new ArrayList<>();
+        for (int i = 0; i < 200_000; i++) {
+            double x = 40 * rng.nextDouble() - 20;
+            plain.add(new double[] {3 * x + 0.15 * x * x + rng.nextGaussian(), x, 1});
+        }
+        double truth = TrailEncounter.slope(plain);
+        List<double[]> drawn = new ArrayList<>();
+        List<double[]> unweighted = new ArrayList<>();
+        for (int i = 0; i < 20_000; i++) {
+            double x = rng.nextDouble() < 0.2 ? 40 * rng.nextDouble() - 20 : 5 + 10 * rng.nextDouble();
+            double q = 0.2 / 40 + (x >= 5 && x <= 15 ? 0.8 / 10 : 0);
+            double t = 3 * x + 0.15 * x * x + rng.nextGaussian();
+            drawn.add(new double[] {t, x, (1.0 / 40) / q});
+            unweighted.add(new double[] {t, x, 1});
+        }
+        double sigma = TrailEncounter.slopeSigma(drawn, 5);
+        assertThat(sigma).isPositive();
+        assertThat(TrailEncounter.slope(drawn)).isCloseTo(truth, within(3 * sigma));
+        assertThat(Math.abs(TrailEncounter.slope(unweighted) - truth)).isGreaterThan(3 * sigma);
+    }
+
+    @Test
     void densityPeakOfASyntheticCloudIsItsModeWithAnHonestUncertainty() {
         double p = 33.2 * 365.25;
         TrailEncounter t = TrailEncounter.of(section(99, 1500), p, 2.5, EPHEMERIS);
