@@ -31,7 +31,7 @@ import trailcross.frames.Angles;
  * taken in that direction because the section is chosen by node time: fitted the other way, node time on
  * P0, the window truncates the response and flattens the slope (Hausman &amp; Wise 1977, truncated
  * regression; from memory), which with ejection's other variables spreading node times inflated fM (the Leonids' 1899
- * trail in 1999: 1.24 that way, 0.29 this way, the trail's axis 0.40);</li>
+ * trail in 1999, before the slope was weighted: 1.24 that way, 0.29 this way, the trail's axis 0.40);</li>
  * <li>ESS: Kish's effective number of the crossings behind the profile.</li>
  * </ul>
  *
@@ -206,10 +206,6 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
     }
 
     /**
-     * The standard deviation of the weighted median over bootstrap resamples of the crossings (Efron &amp;
-     * Tibshirani 1993, ch. 6), seeded so that a run is reproducible.
-     */
-    /**
      * The weighted least-squares slope of y on x, Σw(x − x̄)(y − ȳ) / Σw(x − x̄)² with weighted means: weighted
      * by the real meteoroids each crossing stands for (importance weights included), so that it estimates the
      * trail's own slope whatever proposal drew the particles; unweighted, it is the slope of the proposal's
@@ -249,44 +245,59 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
      * @return the 1-σ uncertainty of |slope| (NaN with fewer than three pairs)
      */
     static double slopeSigma(List<double[]> xy, long seed) {
-        int n = xy.size();
-        if (n < 3) {
+        if (xy.size() < 3) {
             return Double.NaN;
         }
-        org.apache.commons.math3.random.RandomGenerator rng = new org.apache.commons.math3.random.Well19937c(
-                new int[] {(int) seed, (int) (seed >>> 32)});
-        org.apache.commons.math3.stat.descriptive.SummaryStatistics st = new org.apache.commons.math3.stat.descriptive.SummaryStatistics();
-        List<double[]> pick = new ArrayList<>(n);
-        for (int b = 0; b < BOOTSTRAP; b++) {
-            pick.clear();
-            for (int i = 0; i < n; i++) {
-                pick.add(xy.get(rng.nextInt(n)));
+        List<double[]> rows = new ArrayList<>(xy.size());
+        return resampledSd(xy.size(), seed, pick -> {
+            rows.clear();
+            for (int j : pick) {
+                rows.add(xy.get(j));
             }
-            double k = slope(pick);
-            if (Double.isFinite(k)) {
-                st.addValue(Math.abs(k));
-            }
-        }
-        return st.getN() > 1 ? st.getStandardDeviation() : Double.NaN;
+            return Math.abs(slope(rows));
+        });
     }
 
+    /**
+     * The standard deviation of the weighted median over bootstrap resamples of the crossings (Efron &amp;
+     * Tibshirani 1993, ch. 6), seeded so that a run is reproducible.
+     */
     static double bootstrapSigma(double[] values, double[] weights, long seed) {
         int n = values.length;
-        org.apache.commons.math3.random.RandomGenerator rng = new org.apache.commons.math3.random.Well19937c(
-                new int[] {(int) seed, (int) (seed >>> 32)});
         double[] v = new double[n];
         double[] w = new double[n];
-        org.apache.commons.math3.stat.descriptive.SummaryStatistics st = new org.apache.commons.math3.stat.descriptive.SummaryStatistics();
-        for (int b = 0; b < BOOTSTRAP; b++) {
+        return resampledSd(n, seed, pick -> {
             double total = 0;
             for (int i = 0; i < n; i++) {
-                int j = rng.nextInt(n);
-                v[i] = values[j];
-                w[i] = weights[j];
+                v[i] = values[pick[i]];
+                w[i] = weights[pick[i]];
                 total += w[i];
             }
-            if (total > 0) {
-                st.addValue(DensityProfile.weightedQuantile(v, w, 0.5));
+            return total > 0 ? DensityProfile.weightedQuantile(v, w, 0.5) : Double.NaN;
+        });
+    }
+
+    /**
+     * The bootstrap's one loop: {@value #BOOTSTRAP} resamples of n items with replacement, drawn from a
+     * generator seeded by {@code seed}, a statistic of each; resamples whose statistic is not finite are left out.
+     *
+     * @param n items
+     * @param seed the seed
+     * @param statistic of the indices drawn
+     * @return the statistic's standard deviation (NaN with fewer than two finite values)
+     */
+    private static double resampledSd(int n, long seed, java.util.function.ToDoubleFunction<int[]> statistic) {
+        org.apache.commons.math3.random.RandomGenerator rng = new org.apache.commons.math3.random.Well19937c(
+                new int[] {(int) seed, (int) (seed >>> 32)});
+        org.apache.commons.math3.stat.descriptive.SummaryStatistics st = new org.apache.commons.math3.stat.descriptive.SummaryStatistics();
+        int[] pick = new int[n];
+        for (int b = 0; b < BOOTSTRAP; b++) {
+            for (int i = 0; i < n; i++) {
+                pick[i] = rng.nextInt(n);
+            }
+            double x = statistic.applyAsDouble(pick);
+            if (Double.isFinite(x)) {
+                st.addValue(x);
             }
         }
         return st.getN() > 1 ? st.getStandardDeviation() : Double.NaN;

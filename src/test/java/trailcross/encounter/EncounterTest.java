@@ -124,11 +124,21 @@ class EncounterTest {
         // ejection variables; the section keeps node passages within 10 days of the Earth, as TrailEncounter
         // chooses it. Fitting node time on P0 inside that window flattens the slope (fM came out near 1);
         // P0 on node time does not.
-        Well19937c rng = new Well19937c(7);
+        double p = 33.2 * 365.25;
+        TrailEncounter te = TrailEncounter.of(windowedSection(7, 3000), p, 2.5, EPHEMERIS);
+        assertThat(te.fM()).isCloseTo(1.0 / 3, within(0.02));
+    }
+
+    /**
+     * A section of a synthetic trail three revolutions old (fM = 1/3) whose node times also scatter by 10 days
+     * with the other ejection variables, kept within 10 days of the Earth's passage as TrailEncounter chooses it.
+     */
+    private static List<Encounter> windowedSection(int seed, int size) {
+        Well19937c rng = new Well19937c(seed);
         double tE = 7261.6;
         double p = 33.2 * 365.25;
         List<Encounter> list = new ArrayList<>();
-        for (int k = 0; list.size() < 3000; k++) {
+        for (int k = 0; list.size() < size; k++) {
             double p0 = p + 40 * (rng.nextDouble() - 0.5);
             double t = tE + 3 * (p0 - p) + 10 * rng.nextGaussian();
             if (Math.abs(t - tE) > 10) {
@@ -140,35 +150,19 @@ class EncounterTest {
                     new double[] {0.9886 + dr, 0, 0, 0, 0, 0.01}, false);
             list.add(new Encounter(c, tE, dr, lambda, t - tE, new GeocentricRadiant(153.6, 21.8, 71.0, lambda)));
         }
-        TrailEncounter te = TrailEncounter.of(list, p, 2.5, EPHEMERIS);
-        assertThat(te.fM()).isCloseTo(1.0 / 3, within(0.02));
+        return list;
     }
 
     @Test
     void fmUncertaintyMatchesTheScatterOfIndependentSections() {
         // Twenty independent sections of the same synthetic trail (fM = 1/3, node times scattered 10 days by the
         // other ejection variables): the stated σ of fM must match the spread of fM from section to section.
-        double tE = 7261.6;
         double p = 33.2 * 365.25;
         int runs = 20;
         double[] fm = new double[runs];
         double meanSigma = 0;
         for (int s = 0; s < runs; s++) {
-            Well19937c rng = new Well19937c(100 + s);
-            List<Encounter> list = new ArrayList<>();
-            for (int k = 0; list.size() < 300; k++) {
-                double p0 = p + 40 * (rng.nextDouble() - 0.5);
-                double t = tE + 3 * (p0 - p) + 10 * rng.nextGaussian();
-                if (Math.abs(t - tE) > 10) {
-                    continue;
-                }
-                double dr = -0.0005 + 0.0003 * rng.nextGaussian();
-                double lambda = 235.30 + 0.01 * rng.nextGaussian();
-                NodeCrossing c = new NodeCrossing(k, tE - 8 * p - 3, 1e9, 1e-5, p0, t,
-                        new double[] {0.9886 + dr, 0, 0, 0, 0, 0.01}, false);
-                list.add(new Encounter(c, tE, dr, lambda, t - tE, new GeocentricRadiant(153.6, 21.8, 71.0, lambda)));
-            }
-            TrailEncounter te = TrailEncounter.of(list, p, 2.5, EPHEMERIS);
+            TrailEncounter te = TrailEncounter.of(windowedSection(100 + s, 300), p, 2.5, EPHEMERIS);
             fm[s] = te.fM();
             meanSigma += te.fMSigma() / runs;
         }
