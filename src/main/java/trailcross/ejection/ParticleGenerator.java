@@ -26,18 +26,23 @@ import trailcross.stream.VelocityModel;
  * Grains that a model cannot lift off the nucleus are drawn again: the production counts what leaves.
  *
  * <p>Random numbers: pseudo-random from Commons Math's WELL19937c, one generator per block of
- * {@value #BLOCK} particles seeded from (seed, block), or the Sobol sequence (Commons Math; point i + 1
- * for particle i), so that the cloud depends on the seed only, never on the thread count.
+ * {@value #BLOCK} particles ({@value #FOCUSED_BLOCK} under a proposal, whose particles each cost thousands of
+ * candidates, so that a stage of a few thousand still spreads over every thread) seeded from (seed, block),
+ * or the Sobol sequence (Commons Math; point i + 1 for particle i), so that the cloud depends on the seed
+ * only, never on the thread count.
  */
 public final class ParticleGenerator {
 
     /** Particles per random-number block. */
     public static final int BLOCK = 4096;
+    /** Particles per random-number block under a proposal (not the prior). */
+    public static final int FOCUSED_BLOCK = 64;
     /** m/s → au/d (IAU 2012 au). */
     public static final double M_S_TO_AU_D = 86400.0 / (Body.Constants.AU_KM * 1e3);
     private static final int MAX_REDRAWS = 1000;
 
-    private final ParentHistory history;
+    /** The parent's states over the arc, for the candidates' draws. */
+    private final trailcross.dynamics.StateTable arcStates;
     private final ActiveArc arc;
     private final ProductionProfile production;
     private final SizeDistribution sizes;
@@ -55,8 +60,8 @@ public final class ParticleGenerator {
      * @param arc the active arc of the return
      */
     public ParticleGenerator(StreamDefinition stream, ParentHistory history, ActiveArc arc) {
-        this.history = history;
         this.arc = arc;
+        this.arcStates = new trailcross.dynamics.StateTable(history, arc.start(), arc.end());
         this.production = ProductionProfile.of(history, arc, stream.ejection(), stream.parent().dustProductionKgS());
         var p = stream.particles();
         this.sizes = new SizeDistribution(p.radiusMinM(), p.radiusMaxM(), p.densityKgM3(), p.massIndex(),
@@ -124,7 +129,8 @@ public final class ParticleGenerator {
             throw new IllegalArgumentException("--particles must be >= 1, got " + n);
         }
         Meteoroid[] out = new Meteoroid[n];
-        int blocks = (n + BLOCK - 1) / BLOCK;
+        int size = blockSize(focus);
+        int blocks = (n + size - 1) / size;
         Runnable job = () -> IntStream.range(0, blocks).parallel()
                 .forEach(b -> block(b, n, seed, quasiRandom, focus, firstId, allocation, out));
         if (threads <= 1) {
@@ -170,14 +176,22 @@ public final class ParticleGenerator {
             double[] u = new double[4];
             double[] s = new double[6];
             double[] dir = new double[3];
+            double[] c = new double[CANDIDATE];
             double sum = 0;
             double sum2 = 0;
             long done = 0;
             for (long target = draws;; target = Math.min(2 * target, Z_MAX_DRAWS)) {
                 for (; done < target; done++) {
+                    // As draw() with the prior: a grain the model cannot lift is drawn again.
                     fill(rng, u);
-                    Meteoroid m = draw(done, k, Double.NaN, u, rng, EjectionFocus.PRIOR, s, dir);
-                    double a = focus.acceptance(m.state(), m.beta());
+                    for (int stuck = 0; !candidate(k, u, s, dir, c); stuck++) {
+                        if (stuck >= MAX_REDRAWS) {
+                            throw new IllegalArgumentException("the ejection model lifts no meteoroid of the "
+                                    + "stream's sizes off the nucleus; reduce particles.radius_max_m or parent.radius_km");
+                        }
+                        fill(rng, u);
+                    }
+                    double a = focus.acceptance(s, c[BETA]);
                     sum += a;
                     sum2 += a * a;
                 }
@@ -306,7 +320,8 @@ public final class ParticleGenerator {
             throw new IllegalArgumentException("slice " + lo + ".." + hi + " is not inside 0.." + n);
         }
         Meteoroid[] out = new Meteoroid[n];
-        for (int b = lo / BLOCK; b * BLOCK < hi; b++) {
+        int size = blockSize(focus);
+        for (int b = lo / size; b * size < hi; b++) {
             block(b, n, seed, false, focus, firstId, allocation, out, hi);
         }
         return Arrays.asList(Arrays.copyOfRange(out, lo, hi));
@@ -321,8 +336,9 @@ public final class ParticleGenerator {
             double[] allocation, Meteoroid[] out, int upTo) {
         RandomGenerator rng = new Well19937c(new int[] {(int) seed, (int) (seed >>> 32), b});
         SobolSequenceGenerator sobol = null;
-        int from = b * BLOCK;
-        int to = Math.min(Math.min(n, upTo), from + BLOCK);
+        int size = blockSize(focus);
+        int from = b * size;
+        int to = Math.min(Math.min(n, upTo), from + size);
         if (quasiRandom) {
             sobol = new SobolSequenceGenerator(4);
             sobol.skipTo(from + 1);
@@ -343,31 +359,22 @@ public final class ParticleGenerator {
         }
     }
 
+    /** @return the particles per random-number block under a focus */
+    private static int blockSize(EjectionFocus focus) {
+        return focus.isPrior() ? BLOCK : FOCUSED_BLOCK;
+    }
+
     /** One particle: candidates from u (then from rng) until the nucleus lets it go and the focus keeps it. */
     private Meteoroid draw(long id, int bin, double weight, double[] u, RandomGenerator rng, EjectionFocus focus,
             double[] s, double[] dir) {
+        double[] c = new double[CANDIDATE];
         int stuck = 0;
         for (long attempt = 0;; attempt++) {
-            double t = production.sample(u[0]);
-            history.stateAt(t, s);
-            double mass = stratified ? sizes.massInBin(bin, u[1]) : sizes.mass(u[1]);
-            double radius = sizes.radius(mass);
-            double r = Math.sqrt(s[0] * s[0] + s[1] * s[1] + s[2] * s[2]);
-            double v = model.speedMs(r, radius);
-            if (escape != null) {
-                v = escape.speedAtInfinity(v);
-            }
-            if (v >= 0) {
-                v *= speedScale;
-                directions.direction(u[2], u[3], s, dir);
-                double dv = v * M_S_TO_AU_D;
-                s[3] += dv * dir[0];
-                s[4] += dv * dir[1];
-                s[5] += dv * dir[2];
-                double beta = RadiationPressure.beta(qpr, density, radius);
+            if (candidate(bin, u, s, dir, c)) {
                 // The prior keeps every candidate without a draw, so that its cloud is the plain one bit for bit.
-                if (focus.isPrior() || rng.nextDouble() < focus.acceptance(s, beta)) {
-                    return new Meteoroid(id, arc.perihelion(), t, s.clone(), radius, mass, beta, weight, v);
+                if (focus.isPrior() || rng.nextDouble() < focus.acceptance(s, c[BETA])) {
+                    return new Meteoroid(id, arc.perihelion(), c[TIME], s.clone(), c[RADIUS], c[MASS], c[BETA], weight,
+                            c[SPEED]);
                 }
             } else if (++stuck == MAX_REDRAWS) {
                 throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
@@ -380,6 +387,52 @@ public final class ParticleGenerator {
             }
             fill(rng, u);
         }
+    }
+
+    /** Slots of a candidate's record ({@link #candidate}). */
+    private static final int TIME = 0;
+    private static final int MASS = 1;
+    private static final int RADIUS = 2;
+    private static final int BETA = 3;
+    private static final int SPEED = 4;
+    private static final int CANDIDATE = 5;
+
+    /**
+     * One candidate of the stream's own ejection law from four uniform numbers, without allocation (the
+     * normalising constants draw millions).
+     *
+     * @param bin its size bin
+     * @param u four numbers in [0, 1)
+     * @param s receives its heliocentric state at ejection
+     * @param dir scratch (3)
+     * @param c receives its time, mass, radius, β and ejection speed (m/s) at {@link #TIME} … {@link #SPEED}
+     * @return false when the model lifts no grain of that size off the nucleus (draw again)
+     */
+    private boolean candidate(int bin, double[] u, double[] s, double[] dir, double[] c) {
+        double t = production.sample(u[0]);
+        arcStates.stateAt(t, s);
+        double mass = stratified ? sizes.massInBin(bin, u[1]) : sizes.mass(u[1]);
+        double radius = sizes.radius(mass);
+        double r = Math.sqrt(s[0] * s[0] + s[1] * s[1] + s[2] * s[2]);
+        double v = model.speedMs(r, radius);
+        if (escape != null) {
+            v = escape.speedAtInfinity(v);
+        }
+        if (!(v >= 0)) {
+            return false;
+        }
+        v *= speedScale;
+        directions.direction(u[2], u[3], s, dir);
+        double dv = v * M_S_TO_AU_D;
+        s[3] += dv * dir[0];
+        s[4] += dv * dir[1];
+        s[5] += dv * dir[2];
+        c[TIME] = t;
+        c[MASS] = mass;
+        c[RADIUS] = radius;
+        c[BETA] = RadiationPressure.beta(qpr, density, radius);
+        c[SPEED] = v;
+        return true;
     }
 
     private static void fill(RandomGenerator rng, double[] u) {

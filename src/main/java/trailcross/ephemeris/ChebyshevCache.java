@@ -211,6 +211,43 @@ public final class ChebyshevCache implements Ephemeris {
         throw new AssertionError(body);
     }
 
+    /**
+     * Fits now, on several threads, every block that covers [from, to] (clipped to the span) and is not yet
+     * fitted, instead of one at a time on first use. A forecast's first integration, the parent's over
+     * centuries, otherwise fits them on one thread: measured on the demo (2 cores), 47 s of the full
+     * planetary theory's evaluations before any meteoroid moves. The planets and the Moon go first, the Sun's
+     * offset (fitted from the planets' own blocks) after them. The blocks are the ones a lazy fit would make,
+     * bit for bit.
+     *
+     * @param from first instant, TDB days since J2000
+     * @param to last instant
+     * @param threads worker threads
+     */
+    public void prefill(double from, double to, int threads) {
+        double a = Math.max(from, origin);
+        double b = Math.min(to, last);
+        if (!(b >= a)) {
+            return;
+        }
+        java.util.List<int[]> planets = new java.util.ArrayList<>();
+        java.util.List<int[]> sun = new java.util.ArrayList<>();
+        for (int i = 0; i < ITEMS.length; i++) {
+            for (int k = indexOf(i, a); k <= indexOf(i, b); k++) {
+                if (blocks[i].get(k) == null) {
+                    (i == SUN_ITEM ? sun : planets).add(new int[] {i, k});
+                }
+            }
+        }
+        java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(Math.max(1, threads));
+        try {
+            for (java.util.List<int[]> jobs : java.util.List.of(planets, sun)) {
+                pool.submit(() -> jobs.parallelStream().forEach(j -> block(j[0], j[1]))).join();
+            }
+        } finally {
+            pool.shutdown();
+        }
+    }
+
     /** The block of item i with the given index, fitted on first use. */
     private double[] block(int i, int index) {
         double[] c = blocks[i].get(index);

@@ -241,6 +241,12 @@ public final class ForecastRun {
                     s.span() ? s.firstYear() + ".." + s.lastYear() : Integer.toString(s.firstYear()), ephemeris.name(),
                     ParentReturns.yearOf(ephemeris.firstDay()) + 1, ParentReturns.yearOf(ephemeris.lastDay()) - 1));
         }
+        if (ephemeris instanceof trailcross.ephemeris.ChebyshevCache cache) {
+            // Every block the parent's and the meteoroids' integrations will ask for, fitted on all threads.
+            double epoch = run.parent().epoch().daysSinceJ2000();
+            cache.prefill(Math.min(ParentReturns.yearStart(s.sinceYear()), epoch) - 40,
+                    Math.max(windowEnd, epoch) + 40, s.threads());
+        }
         ParentReturns.Result returns = ParentReturns.compute(run.parent(), ephemeris, s.sinceYear(), s.firstYear());
         List<Perihelion> chosen = new ArrayList<>(returns.returns().stream().filter(p -> p.t() < spanStart - 30)
                 .filter(p -> !s.screen() || trailcross.orbit.Moid.of(p.elements(),

@@ -152,7 +152,9 @@ class ParticleGeneratorTest {
             assertThat(cloud.get(k).speedMs()).isZero();
             double[] s = out.get(k).state();
             double dr = Math.hypot(Math.hypot(s[0] - parent[0], s[1] - parent[1]), s[2] - parent[2]);
-            assertThat(dr).as("particle %d after one revolution", k).isLessThan(1e-8);
+            // The two integrations' own differences and the ejection state's interpolation from the arc's
+            // table (StateTable, a relative 1e-11 in velocity) leave 1.0e-8 au (measured).
+            assertThat(dr).as("particle %d after one revolution", k).isLessThan(2e-8);
         }
     }
 
