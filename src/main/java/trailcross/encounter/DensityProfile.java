@@ -43,7 +43,53 @@ public final class DensityProfile {
      */
     public record Result(double[] grid, double[] value, double[] low, double[] high, double peak, double peakValue,
             double peakSigma, double peakValueSigma, double hR, double hLambda, double fwhm, double ess) {
+
+        /**
+         * The profile's other maxima that rival its peak: local maxima of at least {@code share} of the peak's
+         * value, each set apart from every higher maximum by a dip of at least {@value #DIP} of its own value
+         * (its prominence; a ripple of the kernel sum is not a maximum). Where one exists the peak's
+         * resampling σ mixes the two places, and a forecaster should read both.
+         *
+         * @param share least value, as a share of the peak's
+         * @return grid indices, highest first
+         */
+        public int[] otherMaxima(double share) {
+            int n = value.length;
+            int top = 0;
+            for (int j = 1; j < n; j++) {
+                if (value[j] > value[top]) {
+                    top = j;
+                }
+            }
+            java.util.List<Integer> found = new java.util.ArrayList<>();
+            for (int j = 1; j + 1 < n; j++) {
+                if (j == top || value[j] < share * value[top] || value[j] < value[j - 1] || value[j] < value[j + 1]) {
+                    continue;
+                }
+                // The deepest dip towards the nearest higher point on each side; the shallower side decides.
+                double prominence = Double.POSITIVE_INFINITY;
+                for (int dir = -1; dir <= 1; dir += 2) {
+                    double low = value[j];
+                    int k = j + dir;
+                    while (k >= 0 && k < n && value[k] <= value[j]) {
+                        low = Math.min(low, value[k]);
+                        k += dir;
+                    }
+                    if (k >= 0 && k < n) {
+                        prominence = Math.min(prominence, value[j] - low);
+                    }
+                }
+                if (prominence >= DIP * value[j]) {
+                    found.add(j);
+                }
+            }
+            found.sort((a, b) -> Double.compare(value[b], value[a]));
+            return found.stream().mapToInt(Integer::intValue).toArray();
+        }
     }
+
+    /** Least dip, as a share of a maximum's value, that sets it apart from a higher one. */
+    public static final double DIP = 0.03;
 
     private DensityProfile() {
     }

@@ -314,6 +314,25 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
         return Math.pow(10, logM) * 1e-3;
     }
 
+    /** A rival maximum is listed from this share of the peak's value up. */
+    public static final double RIVAL_SHARE = 0.8;
+
+    /**
+     * The activity profile's other maxima of at least {@value #RIVAL_SHARE} of the peak ({@link
+     * DensityProfile.Result#otherMaxima}).
+     *
+     * @return per maximum: its time (TDB days since J2000), solar longitude (degrees) and share of the peak
+     */
+    public List<double[]> rivalMaxima() {
+        double[] t = profileTimes();
+        List<double[]> out = new java.util.ArrayList<>();
+        for (int j : profile.otherMaxima(RIVAL_SHARE)) {
+            out.add(new double[] {t[j], trailcross.frames.Angles.normaliseDeg(profile.grid()[j]),
+                    profile.value()[j] / profile.peakValue()});
+        }
+        return out;
+    }
+
     /** @return the profile's time of each grid point, TDB days since J2000 (linear in longitude about the peak) */
     public double[] profileTimes() {
         double[] g = profile.grid();

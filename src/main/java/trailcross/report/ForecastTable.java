@@ -60,6 +60,12 @@ public final class ForecastTable {
                         + "resampling uncertainties are unreliable (give more --particles)%n",
                         m.ess());
             }
+            if (m != null) {
+                for (double[] x : m.rivalMaxima()) {
+                    o.printf(Locale.ROOT, "     a second maximum at %s UT (sol.long %.4f, %.0f%% of the peak): the peak's "
+                            + "sigma spans the choice between them%n", minute(x[0]), x[1], 100 * x[2]);
+                }
+            }
             if (mt.timesDisagree()) {
                 o.printf(Locale.ROOT, "     cloud and axis peaks differ by %.0f min, more than twice their uncertainty "
                         + "(cloud %.0f, axis %.1f min)%n", (m.peakT() - a.peakT()) * 1440, m.peakSigmaMin(), a.sigmaMin());

@@ -156,13 +156,16 @@ public final class ForecastWriter {
                 TrailEncounter m = mt.cloud();
                 items.add(String.format(Locale.ROOT, "    {\"year\": %d, \"return_year\": %d, \"ess\": %s, \"peak_utc\": %s, "
                         + "\"peak_sigma_min\": %s, \"delta_r_au\": %s, \"delta_r_sigma_au\": %s, \"axis_peak_utc\": %s, "
-                        + "\"axis_delta_r_au\": %s, \"fm\": %s, \"fm_sigma\": %s}", mt.year(),
+                        + "\"axis_delta_r_au\": %s, \"fm\": %s, \"fm_sigma\": %s, \"other_maxima\": [%s]}", mt.year(),
                         mt.returnYear(), m == null ? "null" : f(m.ess(), 1), json(utc(mt.peakT())),
                         m == null ? "null" : f(m.peakSigmaMin(), 1), m == null ? "null" : f(m.deltaR(), 6),
                         m == null || Double.isNaN(m.deltaRSigma()) ? "null" : f(m.deltaRSigma(), 6),
                         mt.axis() == null ? "null" : json(utc(mt.axis().peakT())),
                         mt.axis() == null ? "null" : f(mt.axis().deltaR(), 6), m == null ? "null" : f(m.fM(), 4),
-                        m == null || Double.isNaN(m.fMSigma()) ? "null" : f(m.fMSigma(), 4)));
+                        m == null || Double.isNaN(m.fMSigma()) ? "null" : f(m.fMSigma(), 4),
+                        m == null ? "" : String.join(", ", m.rivalMaxima().stream().map(x -> String.format(Locale.ROOT,
+                                "{\"utc\": %s, \"solar_longitude_deg\": %s, \"share_of_peak\": %s}", json(utc(x[0])),
+                                f(x[1], 4), f(x[2], 3))).toList())));
             }
             w.write(String.join(",\n", items));
             w.write(items.isEmpty() ? "  ],\n" : "\n  ],\n");

@@ -1,6 +1,7 @@
 package trailcross.encounter;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import org.apache.commons.math3.random.Well19937c;
 import org.junit.jupiter.api.Test;
@@ -62,6 +63,36 @@ class DensityProfileTest {
         // one where the bias term matters.
         assertThat(coveredWithBias).isGreaterThanOrEqualTo((int) (0.9 * runs));
         assertThat(coveredByResamplingAlone).isLessThanOrEqualTo((int) (0.6 * runs));
+    }
+
+    @Test
+    void twoClumpsOfNearlyEqualDensityGiveARivalMaximumAndOneGivesNone() {
+        // Two Gaussian clumps along the path, 0.1 degree apart (4 kernel widths), the second with 0.9 of the
+        // first's meteoroids: the profile's second maximum lies at the second clump's centre with about 0.9
+        // of the peak; one clump alone has no rival.
+        int n = 20_000;
+        Well19937c rng = new Well19937c(21);
+        double[] dr = new double[n];
+        double[] lam = new double[n];
+        double[] w = new double[n];
+        double[] v = new double[n];
+        int first = (int) Math.round(n / 1.9);
+        for (int i = 0; i < n; i++) {
+            dr[i] = 1e-4 * rng.nextGaussian();
+            lam[i] = (i < first ? CENTRE : CENTRE + 0.1) + 0.015 * rng.nextGaussian();
+            w[i] = 1;
+            v[i] = 1;
+        }
+        DensityProfile.Result two = DensityProfile.of(dr, lam, w, v, 3);
+        int[] rivals = two.otherMaxima(0.8);
+        assertThat(rivals).hasSize(1);
+        assertThat(two.peak()).isCloseTo(CENTRE, within(0.01));
+        assertThat(two.grid()[rivals[0]]).isCloseTo(CENTRE + 0.1, within(0.01));
+        assertThat(two.value()[rivals[0]] / two.peakValue()).isCloseTo(0.9, within(0.06));
+        assertThat(two.otherMaxima(0.95)).isEmpty();
+        DensityProfile.Result one = DensityProfile.of(java.util.Arrays.copyOf(dr, first),
+                java.util.Arrays.copyOf(lam, first), java.util.Arrays.copyOf(w, first), java.util.Arrays.copyOf(v, first), 3);
+        assertThat(one.otherMaxima(0.5)).isEmpty();
     }
 
     @Test
