@@ -47,7 +47,8 @@ class ForecastCommandTest {
         assertThat(Files.readAllLines(dir.resolve("crossings.csv")).size()).isGreaterThan(10);
         assertThat(Files.readString(dir.resolve("radiants.csv"))).startsWith("date_utc,solar_longitude_deg,ra_deg,dec_deg,vg_km_s\n2027-");
         assertThat(Files.readString(dir.resolve("summary.json"))).contains("\"seed\": 1").contains("\"caution\"")
-                .contains("\"ess\": ").contains("\"run_seconds\": ").contains("\"delta_r_sigma_au\": ").contains("\"fm_sigma\": ");
+                .contains("\"ess\": ").contains("\"run_seconds\": ").contains("\"delta_r_sigma_au\": ").contains("\"fm_sigma\": ")
+                .contains("\"other_maxima\": [");
         for (String png : new String[] {"node-map.png", "activity.png", "radiants.png"}) {
             byte[] b = Files.readAllBytes(dir.resolve(png));
             assertThat(b.length).as(png).isGreaterThan(5000);
