@@ -62,8 +62,8 @@ public final class ForecastTable {
             }
             if (m != null) {
                 for (double[] x : m.rivalMaxima()) {
-                    o.printf(Locale.ROOT, "     a second maximum at %s UT (sol.long %.4f, %.0f%% of the peak): the peak's "
-                            + "sigma spans the choice between them%n", minute(x[0]), x[1], 100 * x[2]);
+                    o.printf(Locale.ROOT, "     another maximum at %s UT (sol.long %.4f, %.0f%% of the peak): the peak's "
+                            + "sigma spans the choice among them%n", minute(x[0]), x[1], 100 * x[2]);
                 }
             }
             if (mt.timesDisagree()) {
