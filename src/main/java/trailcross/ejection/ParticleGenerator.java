@@ -7,6 +7,7 @@ import java.util.stream.IntStream;
 import org.apache.commons.math3.random.RandomGenerator;
 import org.apache.commons.math3.random.SobolSequenceGenerator;
 import org.apache.commons.math3.random.Well19937c;
+import org.apache.commons.math3.stat.StatUtils;
 import trailcross.dynamics.ParentHistory;
 import trailcross.ephemeris.Body;
 import trailcross.stream.StreamDefinition;
@@ -224,19 +225,15 @@ public final class ParticleGenerator {
                         }
                     }
                 }
-                double mean = 0;
-                double m2 = 0;
+                double[] replicate = new double[copies];
                 for (int r = 0; r < copies; r++) {
                     if (lifted[r] == 0) {
-                        throw new IllegalArgumentException("the ejection model lifts no meteoroid of the stream's "
-                                + "sizes off the nucleus; reduce particles.radius_max_m or parent.radius_km");
+                        throw cannotLift();
                     }
-                    double e = sum[r] / lifted[r];
-                    double d = e - mean;
-                    mean += d / (r + 1);
-                    m2 += d * (e - mean);
+                    replicate[r] = sum[r] / lifted[r];
                 }
-                double error = Math.sqrt(m2 / (copies - 1) / copies);
+                double mean = StatUtils.mean(replicate);
+                double error = Math.sqrt(StatUtils.variance(replicate, mean) / copies);
                 if (error <= Z_RELATIVE_ERROR * mean || points >= last) {
                     z[k] = mean;
                     se[k] = error;
@@ -418,16 +415,20 @@ public final class ParticleGenerator {
                             c[SPEED]);
                 }
             } else if (++stuck == MAX_REDRAWS) {
-                throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                        "the ejection model lifts no meteoroid of the stream's sizes off the nucleus "
-                                + "(escape speed %.2f m/s); reduce particles.radius_max_m or parent.radius_km",
-                        escape.speedMs()));
+                throw cannotLift();
             }
             if (attempt > 100_000_000L) {
                 throw new IllegalStateException("targeted ejection: no candidate kept in 1e8 draws");
             }
             fill(rng, u);
         }
+    }
+
+    /** @return the error for a stream none of whose grains the ejection model lifts off the nucleus */
+    private IllegalArgumentException cannotLift() {
+        return new IllegalArgumentException("the ejection model lifts no meteoroid of the stream's sizes off the "
+                + "nucleus" + (escape == null ? "" : String.format(java.util.Locale.ROOT, " (escape speed %.2f m/s)",
+                        escape.speedMs())) + "; reduce particles.radius_max_m or parent.radius_km");
     }
 
     /** Slots of a candidate's record ({@link #candidate}). */

@@ -55,12 +55,7 @@ public final class DensityProfile {
          */
         public int[] otherMaxima(double share) {
             int n = value.length;
-            int top = 0;
-            for (int j = 1; j < n; j++) {
-                if (value[j] > value[top]) {
-                    top = j;
-                }
-            }
+            int top = argmax(value);
             java.util.List<Integer> found = new java.util.ArrayList<>();
             for (int j = 1; j + 1 < n; j++) {
                 if (j == top || value[j] < share * value[top] || value[j] < value[j - 1] || value[j] < value[j + 1]) {

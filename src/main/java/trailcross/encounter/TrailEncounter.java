@@ -325,9 +325,9 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
      */
     public List<double[]> rivalMaxima() {
         double[] t = profileTimes();
-        List<double[]> out = new java.util.ArrayList<>();
+        List<double[]> out = new ArrayList<>();
         for (int j : profile.otherMaxima(RIVAL_SHARE)) {
-            out.add(new double[] {t[j], trailcross.frames.Angles.normaliseDeg(profile.grid()[j]),
+            out.add(new double[] {t[j], Angles.normaliseDeg(profile.grid()[j]),
                     profile.value()[j] / profile.peakValue()});
         }
         return out;

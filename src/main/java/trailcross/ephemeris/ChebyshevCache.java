@@ -232,7 +232,7 @@ public final class ChebyshevCache implements Ephemeris {
         java.util.List<int[]> planets = new java.util.ArrayList<>();
         java.util.List<int[]> sun = new java.util.ArrayList<>();
         for (int i = 0; i < ITEMS.length; i++) {
-            for (int k = indexOf(i, a); k <= indexOf(i, b); k++) {
+            for (int k = indexOf(i, a), end = indexOf(i, b); k <= end; k++) {
                 if (blocks[i].get(k) == null) {
                     (i == SUN_ITEM ? sun : planets).add(new int[] {i, k});
                 }
