@@ -161,7 +161,7 @@ public final class ForecastRun {
 
     /**
      * Default particles per return, over all sampling stages: measured on 2 cores, the Leonids 1999 forecast
-     * (four returns) takes 99 s and the demo 156 s.
+     * (four returns) takes 99 s and the demo 156–199 s (four runs).
      */
     public static final int DEFAULT_PARTICLES = 6000;
     /** The quick test: a return's trail can reach the Earth when its orbit's MOID is below this, au. */
