@@ -40,9 +40,13 @@ public final class DensityProfile {
      * @param hLambda the kernel's bandwidth in longitude, degrees
      * @param fwhm the profile's full width at half maximum, the kernel's share removed in quadrature, degrees
      * @param ess Kish's effective number of the values that feed the profile, Σ(v K_r)² form
+     * @param lambda the crossings' longitudes the profile was made from, degrees (null when not kept)
+     * @param contribution what each adds along the path (its value times its delta-r kernel), in
+     *        {@code lambda}'s order, so that profiles of several trails can be summed ({@link CombinedActivity})
      */
     public record Result(double[] grid, double[] value, double[] low, double[] high, double peak, double peakValue,
-            double peakSigma, double peakValueSigma, double hR, double hLambda, double fwhm, double ess) {
+            double peakSigma, double peakValueSigma, double hR, double hLambda, double fwhm, double ess,
+            double[] lambda, double[] contribution) {
 
         /**
          * The profile's other maxima that rival its peak: local maxima of at least {@code share} of the peak's
@@ -184,7 +188,7 @@ public final class DensityProfile {
             fed[i] = Math.abs(c[i]);
         }
         return new Result(grid, prof, low, high, peak, peakValue, sd(peaks), sd(maxima), hR, hL, fwhm,
-                kish(fed));
+                kish(fed), x, c);
     }
 
     /**

@@ -140,7 +140,7 @@ public record TrailEncounter(double returnT, int revolutions, double peakT, doub
             }
             prof = new DensityProfile.Result(prof.grid(), new double[prof.grid().length], new double[prof.grid().length],
                     new double[prof.grid().length], prof.peak(), 0, prof.peakSigma(), 0, prof.hR(), prof.hLambda(),
-                    prof.fwhm(), prof.ess());
+                    prof.fwhm(), prof.ess(), null, null);
         }
         double peakLon = prof.peak();
         // The ZHR's uncertainty: the bootstrap σ of the maximum and, in quadrature, the kernel's smoothing bias

@@ -8,6 +8,7 @@ import java.util.function.Consumer;
 import trailcross.dynamics.Perihelion;
 import trailcross.ejection.ParticleGenerator;
 import trailcross.encounter.AxisMeeting;
+import trailcross.encounter.CombinedActivity;
 import trailcross.encounter.Encounter;
 import trailcross.encounter.NodeCrossing;
 import trailcross.encounter.TrailEncounter;
@@ -126,8 +127,27 @@ public final class ForecastRun {
      * @param trails one per return, in time order
      * @param seconds wall-clock seconds
      * @param absolute whether ZHRs are absolute (the stream gives a dust production)
+     * @param combined per year of the span, in order, the activity of all its trails together when two or more
+     *        trails' clouds meet the Earth that year (else null)
      */
-    public record Result(Settings settings, List<Trail> trails, double seconds, boolean absolute) {
+    public record Result(Settings settings, List<Trail> trails, double seconds, boolean absolute,
+            List<CombinedActivity> combined) {
+
+        /**
+         * @param year a year of the span
+         * @return the activity of all that year's trails together, or null (fewer than two cloud meetings)
+         */
+        public CombinedActivity combined(int year) {
+            int k = year - settings.firstYear();
+            return k >= 0 && k < combined.size() ? combined.get(k) : null;
+        }
+
+        /** @return the factor that turns the clouds' profile values into what the outputs show: 1 for absolute
+         *     ZHRs, else 1 over the run's strongest cloud meeting's (NaN when every one is zero) */
+        public double intensityScale() {
+            double max = strongestCloud();
+            return absolute ? 1 : max > 0 ? 1 / max : Double.NaN;
+        }
 
         /** @return every meeting, by year, then strongest (ZHR, else smallest |delta r|) first */
         public List<Meeting> meetings() {
@@ -147,6 +167,11 @@ public final class ForecastRun {
          *     every ZHR is zero)
          */
         public double relativeIntensity(Meeting m) {
+            double max = strongestCloud();
+            return m.cloud() == null || max == 0 ? Double.NaN : m.cloud().zhr() / max;
+        }
+
+        private double strongestCloud() {
             double max = 0;
             for (Trail t : trails) {
                 for (Meeting x : t.meetings()) {
@@ -155,13 +180,13 @@ public final class ForecastRun {
                     }
                 }
             }
-            return m.cloud() == null || max == 0 ? Double.NaN : m.cloud().zhr() / max;
+            return max;
         }
     }
 
     /**
      * Default particles per return, over all sampling stages: measured on 2 cores, the Leonids 1999 forecast
-     * (four returns) takes 99 s and the demo 156–199 s (four runs).
+     * (four returns) takes 99–127 s and the demo 156–199 s (six runs).
      */
     public static final int DEFAULT_PARTICLES = 6000;
     /** The quick test: a return's trail can reach the Earth when its orbit's MOID is below this, au. */
@@ -334,7 +359,20 @@ public final class ForecastRun {
             }
             log.accept(line.toString());
         }
-        return new Result(s, trails, (System.nanoTime() - t0) / 1e9, absolute);
+        // Each year's trails together, as an observer counts them (their profiles summed).
+        List<CombinedActivity> combined = new ArrayList<>();
+        for (int y = s.firstYear(); y <= s.lastYear(); y++) {
+            List<TrailEncounter> clouds = new ArrayList<>();
+            for (Trail t : trails) {
+                for (Meeting m : t.meetings()) {
+                    if (m.year() == y && m.cloud() != null) {
+                        clouds.add(m.cloud());
+                    }
+                }
+            }
+            combined.add(clouds.size() < 2 ? null : CombinedActivity.ofMeetings(clouds, s.seed() * 1_000_003L ^ y));
+        }
+        return new Result(s, trails, (System.nanoTime() - t0) / 1e9, absolute, combined);
     }
 
     /**

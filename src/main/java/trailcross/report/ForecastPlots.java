@@ -100,7 +100,8 @@ public final class ForecastPlots {
     /**
      * The activity profiles of one year's meetings: each cloud meeting's ZHR (or relative intensity) against
      * time with its resampling band (16th–84th percentiles), each over its peak ± 3 FWHM (at least ± 1 h); the
-     * time axis spans those hours only. One colour per trail, none reused in a plot.
+     * time axis spans those hours only. One colour per trail, none reused in a plot; when two or more trails
+     * meet the Earth, their sum ({@link trailcross.encounter.CombinedActivity}) dashed in black with its band.
      */
     private static JFreeChart activity(String title, ForecastRun.Result r, int year) {
         YIntervalSeriesCollection data = new YIntervalSeriesCollection();
@@ -111,6 +112,8 @@ public final class ForecastPlots {
             }
         }
         double scale = r.absolute() || max == 0 ? 1 : 1 / max;
+        double from = Double.POSITIVE_INFINITY;
+        double to = Double.NEGATIVE_INFINITY;
         for (ForecastRun.Meeting mt : r.meetings()) {
             TrailEncounter m = mt.cloud();
             if (mt.year() != year || m == null) {
@@ -127,15 +130,37 @@ public final class ForecastPlots {
                 }
             }
             data.addSeries(s);
+            from = Math.min(from, m.peakT() - half);
+            to = Math.max(to, m.peakT() + half);
+        }
+        int trails = data.getSeriesCount();
+        trailcross.encounter.CombinedActivity all = r.combined(year);
+        if (all != null) {
+            YIntervalSeries s = new YIntervalSeries("all trails");
+            double[] t = all.times();
+            for (int k = 0; k < t.length; k++) {
+                if (t[k] >= from && t[k] <= to) {
+                    s.add((t[k] + 10957.5) * 86400000.0, all.value()[k] * scale, all.low()[k] * scale,
+                            all.high()[k] * scale);
+                }
+            }
+            data.addSeries(s);
         }
         DateAxis time = new DateAxis("UTC (" + year + ")");
         time.setTimeZone(java.util.TimeZone.getTimeZone("UTC"));
         DeviationRenderer lines = new DeviationRenderer(true, false);
-        for (int k = 0; k < data.getSeriesCount(); k++) {
-            Color c = colour(k, data.getSeriesCount());
+        for (int k = 0; k < trails; k++) {
+            Color c = colour(k, trails);
             lines.setSeriesPaint(k, c);
             lines.setSeriesFillPaint(k, c);
             lines.setSeriesStroke(k, new BasicStroke(2f));
+        }
+        if (all != null) {
+            // The sum in black, dashed, so that it is told from every trail's colour.
+            lines.setSeriesPaint(trails, Color.BLACK);
+            lines.setSeriesFillPaint(trails, Color.GRAY);
+            lines.setSeriesStroke(trails, new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                    new float[] {6f, 4f}, 0f));
         }
         lines.setAlpha(0.25f);
         XYPlot plot = new XYPlot(data, time, axis(r.absolute() ? "ZHR" : "relative intensity", true), lines);

@@ -3,6 +3,7 @@ package trailcross.report;
 import java.io.PrintWriter;
 import java.util.Locale;
 import trailcross.encounter.AxisMeeting;
+import trailcross.encounter.CombinedActivity;
 import trailcross.encounter.TrailEncounter;
 import trailcross.forecast.ForecastRun;
 import trailcross.time.Epoch;
@@ -13,7 +14,8 @@ import trailcross.time.EpochFormat;
  * peak (UTC) ± its resampling σ, solar longitude, delta r of the cloud and of the axis, fM, FWHM, ZHR ± σ
  * (or the intensity relative to the strongest meeting when the stream gives no dust production), the
  * effective sample size, and the axis' peak; a line under a row says where the cloud and the axis disagree
- * by more than their uncertainties.
+ * by more than their uncertainties, and a line after a year's rows gives all its trails together
+ * ({@link CombinedActivity}) when two or more clouds meet the Earth that year.
  */
 public final class ForecastTable {
 
@@ -36,7 +38,9 @@ public final class ForecastTable {
         o.printf(Locale.ROOT, "%-4s %-5s %3s %-27s %9s %9s %9s %-13s %6s %-15s %6s %-17s%n", "year", "trail", "rev",
                 "peak UTC +- sigma", "sol.long", "dr cloud", "dr axis", "fM +- sigma", "FWHM", r.absolute() ? "ZHR +- sigma"
                         : "rel. intensity", "ESS", "axis peak UTC");
-        for (ForecastRun.Meeting mt : r.meetings()) {
+        java.util.List<ForecastRun.Meeting> meetings = r.meetings();
+        for (int k = 0; k < meetings.size(); k++) {
+            ForecastRun.Meeting mt = meetings.get(k);
             TrailEncounter m = mt.cloud();
             AxisMeeting.Root a = mt.axis();
             String peak = m == null ? "(cloud too thin)" : String.format(Locale.ROOT, "%s +- %.0f min",
@@ -70,10 +74,26 @@ public final class ForecastTable {
                 o.printf(Locale.ROOT, "     cloud and axis peaks differ by %.0f min, more than twice their uncertainty "
                         + "(cloud %.0f, axis %.1f min)%n", (m.peakT() - a.peakT()) * 1440, m.peakSigmaMin(), a.sigmaMin());
             }
+            if (k + 1 == meetings.size() || meetings.get(k + 1).year() != mt.year()) {
+                combined(o, r, mt.year());
+            }
         }
         if (r.meetings().isEmpty()) {
             o.println("No trail meets the Earth in " + years + " (try more --particles or an earlier --since).");
         }
+    }
+
+    /** The line for all of a year's trails together, when two or more clouds meet the Earth that year. */
+    private static void combined(PrintWriter o, ForecastRun.Result r, int year) {
+        CombinedActivity c = r.combined(year);
+        if (c == null) {
+            return;
+        }
+        double scale = r.intensityScale();
+        o.printf(Locale.ROOT, "%-4d all %d trails together: maximum %s UT +- %.0f min, %s %s +- %s%n", year,
+                c.trails(), minute(c.peakT()), c.peakSigmaMin(), r.absolute() ? "ZHR" : "rel. intensity",
+                String.format(Locale.ROOT, r.absolute() ? "%.0f" : "%.3f", c.peakValue() * scale),
+                String.format(Locale.ROOT, r.absolute() ? "%.0f" : "%.3f", c.peakValueSigma() * scale));
     }
 
     private static String minute(double t) {

@@ -10,6 +10,7 @@ import org.apache.commons.csv.CSVPrinter;
 import trailcross.encounter.AxisMeeting;
 import trailcross.encounter.Encounter;
 import trailcross.encounter.RadiantTable;
+import trailcross.encounter.CombinedActivity;
 import trailcross.encounter.TrailEncounter;
 import trailcross.ephemeris.Ephemeris;
 import trailcross.forecast.ForecastRun;
@@ -169,6 +170,18 @@ public final class ForecastWriter {
             }
             w.write(String.join(",\n", items));
             w.write(items.isEmpty() ? "  ],\n" : "\n  ],\n");
+            List<String> together = new ArrayList<>();
+            double scale = r.intensityScale();
+            for (int y = s.firstYear(); y <= s.lastYear(); y++) {
+                CombinedActivity c = r.combined(y);
+                if (c != null) {
+                    together.add(String.format(Locale.ROOT, "    {\"year\": %d, \"trails\": %d, \"peak_utc\": %s, "
+                            + "\"peak_sigma_min\": %s, \"%s\": %s, \"sigma\": %s}", y, c.trails(), json(utc(c.peakT())),
+                            f(c.peakSigmaMin(), 1), r.absolute() ? "zhr" : "relative_intensity",
+                            f(c.peakValue() * scale, r.absolute() ? 1 : 4), f(c.peakValueSigma() * scale, r.absolute() ? 1 : 4)));
+                }
+            }
+            w.write("  \"all_trails\": [" + (together.isEmpty() ? "],\n" : "\n" + String.join(",\n", together) + "\n  ],\n"));
             w.write("  \"run_seconds\": " + f(r.seconds(), 1) + ",\n");
             w.write("  \"caution\": " + json(CAUTION) + "\n");
             w.write("}\n");

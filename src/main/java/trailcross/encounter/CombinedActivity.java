@@ -1,0 +1,164 @@
+package trailcross.encounter;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.apache.commons.math3.random.Well19937c;
+import org.apache.commons.math3.stat.descriptive.rank.Percentile;
+
+/**
+ * The shower's activity in one year from all its trails together, as an observer counts it: the sum of the
+ * trails' activity profiles ({@link DensityProfile}, each with its own kernels) on one time grid, its maximum,
+ * and the maximum's uncertainty by a stratified bootstrap: in each of {@value #RESAMPLES} resamples every trail's
+ * crossings are drawn again on their own, the trails being independent samples (Efron &amp; Tibshirani 1993,
+ * ch. 6 and sec. 8.3 on stratified resampling), and the summed profile's maximum taken; the 16–84% bands come
+ * from the same resamples. Where two trails meet the Earth within hours of each other their sum, not either
+ * trail's peak, is what an observer's count follows.
+ *
+ * @param times the grid, TDB days since J2000 (increasing, evenly spaced)
+ * @param value the summed profile there (ZHR, or the trails' common relative unit)
+ * @param low the 16th percentile of the resampled sums at each grid point
+ * @param high the 84th percentile
+ * @param peakT the summed profile's maximum, TDB days since J2000
+ * @param peakSigmaMin the maximum's resampling standard deviation, minutes
+ * @param peakValue the summed profile at its maximum
+ * @param peakValueSigma the resampling standard deviation of the summed profile's maximum value
+ * @param trails how many trails contribute
+ */
+public record CombinedActivity(double[] times, double[] value, double[] low, double[] high, double peakT,
+        double peakSigmaMin, double peakValue, double peakValueSigma, int trails) {
+
+    /** Bootstrap resamples. */
+    public static final int RESAMPLES = DensityProfile.RESAMPLES;
+    /** At most this many grid points. */
+    private static final int MAX_GRID = 6000;
+
+    /**
+     * One trail's share: its section's crossings along the Earth's path and how longitude maps to time.
+     *
+     * @param lambda the crossings' longitudes, degrees (unwrapped about one another)
+     * @param contribution what each adds to the profile (its value times its delta-r kernel at δr = 0)
+     * @param hLambda the trail's bandwidth in longitude, degrees
+     * @param peakLambda a longitude, degrees, on the same unwrapping as {@code lambda}
+     * @param peakT the time the Earth is there, TDB days since J2000
+     */
+    public record Part(double[] lambda, double[] contribution, double hLambda, double peakLambda, double peakT) {
+
+        /** @return the longitude (on the part's unwrapping) at which the Earth is at time t, degrees */
+        double lambdaAt(double t) {
+            return peakLambda + (t - peakT) * 24 / TrailEncounter.HOURS_PER_DEGREE;
+        }
+
+        /** @return the time at which the Earth is at longitude λ (on the part's unwrapping) */
+        double timeAt(double lambda) {
+            return peakT + (lambda - peakLambda) * TrailEncounter.HOURS_PER_DEGREE / 24;
+        }
+    }
+
+    /**
+     * @param meetings one year's cloud meetings (those without a profile value are left out)
+     * @param seed the bootstrap's seed
+     * @return their summed activity, or null when none has a non-zero profile
+     */
+    public static CombinedActivity ofMeetings(List<TrailEncounter> meetings, long seed) {
+        List<Part> parts = new ArrayList<>();
+        for (TrailEncounter m : meetings) {
+            DensityProfile.Result p = m.profile();
+            if (p != null && p.peakValue() > 0 && p.lambda() != null) {
+                parts.add(new Part(p.lambda(), p.contribution(), p.hLambda(), p.peak(), m.peakT()));
+            }
+        }
+        return of(parts, seed);
+    }
+
+    /**
+     * @param parts the trails' shares
+     * @param seed the bootstrap's seed
+     * @return their summed activity, or null when there is none or it is zero everywhere
+     */
+    public static CombinedActivity of(List<Part> parts, long seed) {
+        if (parts.isEmpty()) {
+            return null;
+        }
+        double from = Double.POSITIVE_INFINITY;
+        double to = Double.NEGATIVE_INFINITY;
+        double step = Double.POSITIVE_INFINITY;
+        for (Part p : parts) {
+            double lo = Arrays.stream(p.lambda()).min().orElseThrow() - 3 * p.hLambda();
+            double hi = Arrays.stream(p.lambda()).max().orElseThrow() + 3 * p.hLambda();
+            from = Math.min(from, p.timeAt(lo));
+            to = Math.max(to, p.timeAt(hi));
+            step = Math.min(step, p.timeAt(p.hLambda() / 6) - p.timeAt(0));
+        }
+        step = Math.max(step, (to - from) / (MAX_GRID - 1));
+        int m = (int) Math.ceil((to - from) / step) + 1;
+        double[] times = new double[m];
+        for (int j = 0; j < m; j++) {
+            times[j] = from + j * step;
+        }
+        double[][] grids = new double[parts.size()][m];
+        for (int k = 0; k < parts.size(); k++) {
+            for (int j = 0; j < m; j++) {
+                grids[k][j] = parts.get(k).lambdaAt(times[j]);
+            }
+        }
+        int[][] all = new int[parts.size()][];
+        for (int k = 0; k < parts.size(); k++) {
+            all[k] = new int[parts.get(k).lambda().length];
+            for (int i = 0; i < all[k].length; i++) {
+                all[k][i] = i;
+            }
+        }
+        double[] sum = sum(parts, grids, all);
+        int best = DensityProfile.argmax(sum);
+        if (!(sum[best] > 0)) {
+            return null;
+        }
+        Well19937c rng = new Well19937c(seed);
+        double[] peaks = new double[RESAMPLES];
+        double[] maxima = new double[RESAMPLES];
+        double[][] boots = new double[RESAMPLES][];
+        int[][] pick = new int[parts.size()][];
+        for (int b = 0; b < RESAMPLES; b++) {
+            for (int k = 0; k < parts.size(); k++) {
+                int n = all[k].length;
+                pick[k] = new int[n];
+                for (int i = 0; i < n; i++) {
+                    pick[k][i] = rng.nextInt(n);
+                }
+            }
+            double[] s = sum(parts, grids, pick);
+            int top = DensityProfile.argmax(s);
+            peaks[b] = DensityProfile.refine(times, s, top);
+            maxima[b] = s[top];
+            boots[b] = s;
+        }
+        double[] low = new double[m];
+        double[] high = new double[m];
+        double[] column = new double[RESAMPLES];
+        Percentile pct = new Percentile().withEstimationType(Percentile.EstimationType.R_7);
+        for (int j = 0; j < m; j++) {
+            for (int b = 0; b < RESAMPLES; b++) {
+                column[b] = boots[b][j];
+            }
+            pct.setData(column);
+            low[j] = pct.evaluate(16);
+            high[j] = pct.evaluate(84);
+        }
+        return new CombinedActivity(times, sum, low, high, DensityProfile.refine(times, sum, best),
+                DensityProfile.sd(peaks) * 1440, sum[best], DensityProfile.sd(maxima), parts.size());
+    }
+
+    /** The trails' profiles at the grid's times, from the crossings picked in each. */
+    private static double[] sum(List<Part> parts, double[][] grids, int[][] pick) {
+        double[] total = new double[grids[0].length];
+        for (int k = 0; k < parts.size(); k++) {
+            Part p = parts.get(k);
+            double[] one = DensityProfile.profile(pick[k], p.contribution(), p.lambda(), grids[k], p.hLambda());
+            for (int j = 0; j < total.length; j++) {
+                total[j] += one[j];
+            }
+        }
+        return total;
+    }
+}
