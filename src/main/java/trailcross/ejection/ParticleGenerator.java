@@ -49,6 +49,8 @@ public final class ParticleGenerator {
     private final SizeDistribution sizes;
     private final EjectionSpeedModel model;
     private final NucleusEscape escape;
+    /** The escape's speed, m/s (NaN without an escape model). */
+    private final double escapeSpeed;
     private final DirectionSampler directions;
     private final double speedScale;
     private final double qpr;
@@ -70,6 +72,7 @@ public final class ParticleGenerator {
         this.model = EjectionSpeedModel.of(stream);
         this.escape = stream.ejection().model() == VelocityModel.FIXED ? null
                 : new NucleusEscape(stream.parent().radiusKm(), stream.parent().densityKgM3());
+        this.escapeSpeed = escape == null ? Double.NaN : escape.speedMs();
         this.directions = new DirectionSampler(stream.ejection().directions(), stream.ejection().coneHalfAngleDeg());
         this.speedScale = stream.ejection().speedScale();
         this.qpr = p.radiationPressureEfficiency();
@@ -458,7 +461,9 @@ public final class ParticleGenerator {
         double r = Math.sqrt(s[0] * s[0] + s[1] * s[1] + s[2] * s[2]);
         double v = model.speedMs(r, radius);
         if (escape != null) {
-            v = escape.speedAtInfinity(v);
+            // NucleusEscape.speedAtInfinity with its constant escape speed taken once.
+            double v2 = v * v - escapeSpeed * escapeSpeed;
+            v = v2 > 0 ? Math.sqrt(v2) : -1;
         }
         if (!(v >= 0)) {
             return false;

@@ -13,6 +13,7 @@ public final class SizeDistribution {
     private final double[] edges;
     private final double[] numberFraction;
     private final double meanMass;
+    private final double[] spans;
 
     /**
      * @param radiusMinM smallest radius, m
@@ -41,6 +42,20 @@ public final class SizeDistribution {
             numberFraction[j] = total > 0 ? integral(edges[j], edges[j + 1], -massIndex) / total : 1.0;
         }
         meanMass = total > 0 ? integral(mMin, mMax, 1 - massIndex) / total : mMin;
+        spans = new double[k + 1];
+        for (int j = 0; j < k; j++) {
+            spans[j] = span(edges[j], edges[j + 1]);
+        }
+        spans[k] = span(edges[0], edges[k]);
+    }
+
+    /**
+     * The constant of {@link #invert} for the range [a, b]: (b/a)^(1−s) − 1. Kept per bin (and, last, for the
+     * whole law) because a mass is drawn for every candidate ejection and the two calls it takes cost as
+     * much as the draw's own.
+     */
+    private double span(double a, double b) {
+        return Math.expm1((1 - massIndex) * Math.log(b / a));
     }
 
     /**
@@ -61,7 +76,7 @@ public final class SizeDistribution {
      * @return the mass, kg
      */
     public double massInBin(int bin, double u) {
-        return invert(edges[bin], edges[bin + 1], u);
+        return invert(edges[bin], edges[bin + 1], spans[bin], u);
     }
 
     /**
@@ -71,17 +86,15 @@ public final class SizeDistribution {
      * @return the mass, kg
      */
     public double mass(double u) {
-        return invert(edges[0], edges[edges.length - 1], u);
+        return invert(edges[0], edges[edges.length - 1], spans[spans.length - 1], u);
     }
 
-    private double invert(double a, double b, double u) {
+    /** The inverse of CDF(m) = (m^(1−s) − a^(1−s)) / (b^(1−s) − a^(1−s)) relative to a; x = (b/a)^(1−s) − 1. */
+    private double invert(double a, double b, double x, double u) {
         if (b == a) {
             return a;
         }
-        // CDF(m) = (m^(1−s) − a^(1−s)) / (b^(1−s) − a^(1−s)), solved for m relative to a.
-        double e = 1 - massIndex;
-        double x = Math.expm1(e * Math.log(b / a));
-        return a * Math.exp(Math.log1p(u * x) / e);
+        return a * Math.exp(Math.log1p(u * x) / (1 - massIndex));
     }
 
     /**

@@ -56,7 +56,38 @@ public record CombinedActivity(double[] times, double[] value, double[] low, dou
     }
 
     /**
-     * @param meetings one year's cloud meetings (those without a profile value are left out)
+     * The meetings whose activity overlaps in time, grouped: each meeting spans its peak ± 3 FWHM (at least
+     * ± 1 h, the activity plot's span), and meetings whose spans overlap, directly or through others, form one
+     * group. A stream met at two nodes in one year (two showers months apart) gives two groups, whose sum
+     * would mean nothing to an observer.
+     *
+     * @param meetings one year's cloud meetings
+     * @return the groups, each in time order, the groups in time order
+     */
+    public static List<List<TrailEncounter>> overlapping(List<TrailEncounter> meetings) {
+        List<TrailEncounter> sorted = new ArrayList<>(meetings);
+        sorted.sort(java.util.Comparator.comparingDouble(m -> m.peakT() - halfSpanDays(m)));
+        List<List<TrailEncounter>> groups = new ArrayList<>();
+        double end = Double.NEGATIVE_INFINITY;
+        for (TrailEncounter m : sorted) {
+            if (groups.isEmpty() || m.peakT() - halfSpanDays(m) > end) {
+                groups.add(new ArrayList<>());
+                end = Double.NEGATIVE_INFINITY;
+            }
+            groups.get(groups.size() - 1).add(m);
+            end = Math.max(end, m.peakT() + halfSpanDays(m));
+        }
+        return groups;
+    }
+
+    /** @return half the span a meeting's activity is shown over, days: 3 FWHM, at least 1 h */
+    public static double halfSpanDays(TrailEncounter m) {
+        return Math.max(3 * m.fwhmHours(), 1.0) / 24;
+    }
+
+    /**
+     * @param meetings cloud meetings whose activity overlaps ({@link #overlapping}; those without a profile
+     *        value are left out)
      * @param seed the bootstrap's seed
      * @return their summed activity, or null when none has a non-zero profile
      */

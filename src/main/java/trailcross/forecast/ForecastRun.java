@@ -121,25 +121,34 @@ public final class ForecastRun {
     }
 
     /**
+     * Trails met together in one year.
+     *
+     * @param year the year
+     * @param activity their summed activity
+     */
+    public record Together(int year, CombinedActivity activity) {
+    }
+
+    /**
      * The result.
      *
      * @param settings the settings
      * @param trails one per return, in time order
      * @param seconds wall-clock seconds
      * @param absolute whether ZHRs are absolute (the stream gives a dust production)
-     * @param combined per year of the span, in order, the activity of all its trails together when two or more
-     *        trails' clouds meet the Earth that year (else null)
+     * @param combined the trails' activity summed, wherever two or more trails' clouds meet the Earth within
+     *        overlapping hours of a year ({@link CombinedActivity#overlapping}), by year and time
      */
     public record Result(Settings settings, List<Trail> trails, double seconds, boolean absolute,
-            List<CombinedActivity> combined) {
+            List<Together> combined) {
 
         /**
          * @param year a year of the span
-         * @return the activity of all that year's trails together, or null (fewer than two cloud meetings)
+         * @return the summed activities of that year's overlapping trails, in time order (empty when no two
+         *     trails' activity overlaps)
          */
-        public CombinedActivity combined(int year) {
-            int k = year - settings.firstYear();
-            return k >= 0 && k < combined.size() ? combined.get(k) : null;
+        public List<CombinedActivity> combined(int year) {
+            return combined.stream().filter(c -> c.year() == year).map(Together::activity).toList();
         }
 
         /** @return the factor that turns the clouds' profile values into what the outputs show: 1 for absolute
@@ -360,7 +369,7 @@ public final class ForecastRun {
             log.accept(line.toString());
         }
         // Each year's trails together, as an observer counts them (their profiles summed).
-        List<CombinedActivity> combined = new ArrayList<>();
+        List<Together> combined = new ArrayList<>();
         for (int y = s.firstYear(); y <= s.lastYear(); y++) {
             List<TrailEncounter> clouds = new ArrayList<>();
             for (Trail t : trails) {
@@ -370,7 +379,13 @@ public final class ForecastRun {
                     }
                 }
             }
-            combined.add(clouds.size() < 2 ? null : CombinedActivity.ofMeetings(clouds, s.seed() * 1_000_003L ^ y));
+            long seed = s.seed() * 1_000_003L ^ y;
+            for (List<TrailEncounter> group : CombinedActivity.overlapping(clouds)) {
+                CombinedActivity c = group.size() < 2 ? null : CombinedActivity.ofMeetings(group, seed++);
+                if (c != null) {
+                    combined.add(new Together(y, c));
+                }
+            }
         }
         return new Result(s, trails, (System.nanoTime() - t0) / 1e9, absolute, combined);
     }

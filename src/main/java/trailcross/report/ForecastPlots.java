@@ -134,9 +134,10 @@ public final class ForecastPlots {
             to = Math.max(to, m.peakT() + half);
         }
         int trails = data.getSeriesCount();
-        trailcross.encounter.CombinedActivity all = r.combined(year);
-        if (all != null) {
-            YIntervalSeries s = new YIntervalSeries("all trails");
+        List<trailcross.encounter.CombinedActivity> groups = r.combined(year);
+        for (int g = 0; g < groups.size(); g++) {
+            trailcross.encounter.CombinedActivity all = groups.get(g);
+            YIntervalSeries s = new YIntervalSeries(groups.size() == 1 ? "trails together" : "trails together " + (g + 1));
             double[] t = all.times();
             for (int k = 0; k < t.length; k++) {
                 if (t[k] >= from && t[k] <= to) {
@@ -155,11 +156,11 @@ public final class ForecastPlots {
             lines.setSeriesFillPaint(k, c);
             lines.setSeriesStroke(k, new BasicStroke(2f));
         }
-        if (all != null) {
-            // The sum in black, dashed, so that it is told from every trail's colour.
-            lines.setSeriesPaint(trails, Color.BLACK);
-            lines.setSeriesFillPaint(trails, Color.GRAY);
-            lines.setSeriesStroke(trails, new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+        for (int k = trails; k < data.getSeriesCount(); k++) {
+            // Sums in black, dashed, so that they are told from every trail's colour (groups do not overlap in time).
+            lines.setSeriesPaint(k, Color.BLACK);
+            lines.setSeriesFillPaint(k, Color.GRAY);
+            lines.setSeriesStroke(k, new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
                     new float[] {6f, 4f}, 0f));
         }
         lines.setAlpha(0.25f);

@@ -14,8 +14,8 @@ import trailcross.time.EpochFormat;
  * peak (UTC) ± its resampling σ, solar longitude, delta r of the cloud and of the axis, fM, FWHM, ZHR ± σ
  * (or the intensity relative to the strongest meeting when the stream gives no dust production), the
  * effective sample size, and the axis' peak; a line under a row says where the cloud and the axis disagree
- * by more than their uncertainties, and a line after a year's rows gives all its trails together
- * ({@link CombinedActivity}) when two or more clouds meet the Earth that year.
+ * by more than their uncertainties, and a line after a year's rows gives trails met in overlapping hours
+ * together ({@link CombinedActivity}).
  */
 public final class ForecastTable {
 
@@ -71,8 +71,11 @@ public final class ForecastTable {
                 }
             }
             if (mt.timesDisagree()) {
+                // Off the trail's core the Earth samples a tilted cross-section's flank, whose maximum need not
+                // lie at the axis' node longitude: the distance says how far off the core the Earth passes.
                 o.printf(Locale.ROOT, "     cloud and axis peaks differ by %.0f min, more than twice their uncertainty "
-                        + "(cloud %.0f, axis %.1f min)%n", (m.peakT() - a.peakT()) * 1440, m.peakSigmaMin(), a.sigmaMin());
+                        + "(cloud %.0f, axis %.1f min; the axis passes %.5f au from the Earth's path)%n",
+                        (m.peakT() - a.peakT()) * 1440, m.peakSigmaMin(), a.sigmaMin(), Math.abs(a.deltaR()));
             }
             if (k + 1 == meetings.size() || meetings.get(k + 1).year() != mt.year()) {
                 combined(o, r, mt.year());
@@ -83,17 +86,19 @@ public final class ForecastTable {
         }
     }
 
-    /** The line for all of a year's trails together, when two or more clouds meet the Earth that year. */
+    /** A line for each group of a year's trails whose activity overlaps, when a group holds two or more. */
     private static void combined(PrintWriter o, ForecastRun.Result r, int year) {
-        CombinedActivity c = r.combined(year);
-        if (c == null) {
-            return;
-        }
         double scale = r.intensityScale();
-        o.printf(Locale.ROOT, "%-4d all %d trails together: maximum %s UT +- %.0f min, %s %s +- %s%n", year,
-                c.trails(), minute(c.peakT()), c.peakSigmaMin(), r.absolute() ? "ZHR" : "rel. intensity",
-                String.format(Locale.ROOT, r.absolute() ? "%.0f" : "%.3f", c.peakValue() * scale),
-                String.format(Locale.ROOT, r.absolute() ? "%.0f" : "%.3f", c.peakValueSigma() * scale));
+        double fewest = r.meetings().stream().filter(m -> m.year() == year && m.cloud() != null)
+                .mapToDouble(m -> m.cloud().ess()).min().orElse(0);
+        for (CombinedActivity c : r.combined(year)) {
+            o.printf(Locale.ROOT, "%-4d %d trails together: maximum %s UT +- %.0f min, %s %s +- %s%s%n", year,
+                    c.trails(), minute(c.peakT()), c.peakSigmaMin(), r.absolute() ? "ZHR" : "rel. intensity",
+                    String.format(Locale.ROOT, r.absolute() ? "%.0f" : "%.3f", c.peakValue() * scale),
+                    String.format(Locale.ROOT, r.absolute() ? "%.0f" : "%.3f", c.peakValueSigma() * scale),
+                    fewest < FEW ? " (unreliable: a trail that year has fewer than " + (int) FEW
+                            + " effective particles)" : "");
+        }
     }
 
     private static String minute(double t) {

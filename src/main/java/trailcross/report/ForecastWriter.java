@@ -173,15 +173,14 @@ public final class ForecastWriter {
             List<String> together = new ArrayList<>();
             double scale = r.intensityScale();
             for (int y = s.firstYear(); y <= s.lastYear(); y++) {
-                CombinedActivity c = r.combined(y);
-                if (c != null) {
+                for (CombinedActivity c : r.combined(y)) {
                     together.add(String.format(Locale.ROOT, "    {\"year\": %d, \"trails\": %d, \"peak_utc\": %s, "
                             + "\"peak_sigma_min\": %s, \"%s\": %s, \"sigma\": %s}", y, c.trails(), json(utc(c.peakT())),
                             f(c.peakSigmaMin(), 1), r.absolute() ? "zhr" : "relative_intensity",
                             f(c.peakValue() * scale, r.absolute() ? 1 : 4), f(c.peakValueSigma() * scale, r.absolute() ? 1 : 4)));
                 }
             }
-            w.write("  \"all_trails\": [" + (together.isEmpty() ? "],\n" : "\n" + String.join(",\n", together) + "\n  ],\n"));
+            w.write("  \"trails_together\": [" + (together.isEmpty() ? "],\n" : "\n" + String.join(",\n", together) + "\n  ],\n"));
             w.write("  \"run_seconds\": " + f(r.seconds(), 1) + ",\n");
             w.write("  \"caution\": " + json(CAUTION) + "\n");
             w.write("}\n");

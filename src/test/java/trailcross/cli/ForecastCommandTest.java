@@ -48,7 +48,7 @@ class ForecastCommandTest {
         assertThat(Files.readString(dir.resolve("radiants.csv"))).startsWith("date_utc,solar_longitude_deg,ra_deg,dec_deg,vg_km_s\n2027-");
         assertThat(Files.readString(dir.resolve("summary.json"))).contains("\"seed\": 1").contains("\"caution\"")
                 .contains("\"ess\": ").contains("\"run_seconds\": ").contains("\"delta_r_sigma_au\": ").contains("\"fm_sigma\": ")
-                .contains("\"other_maxima\": [").contains("\"all_trails\": []");
+                .contains("\"other_maxima\": [").contains("\"trails_together\": []");
         for (String png : new String[] {"node-map.png", "activity.png", "radiants.png"}) {
             byte[] b = Files.readAllBytes(dir.resolve(png));
             assertThat(b.length).as(png).isGreaterThan(5000);
@@ -61,15 +61,15 @@ class ForecastCommandTest {
         MainTest.Run r = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2027", "--returns", "2",
                 "--particles", "300", "--out", dir.toString());
         assertThat(r.code()).as(r.err()).isZero();
-        assertThat(r.out()).contains("2027 all 2 trails together: maximum 2027-06-");
+        assertThat(r.out()).contains("2027 2 trails together: maximum 2027-06-");
         String json = Files.readString(dir.resolve("summary.json"));
-        assertThat(json).contains("\"all_trails\": [\n    {\"year\": 2027, \"trails\": 2, \"peak_utc\": \"2027-06-");
+        assertThat(json).contains("\"trails_together\": [\n    {\"year\": 2027, \"trails\": 2, \"peak_utc\": \"2027-06-");
         // The sum's maximum is at least the stronger trail's (ZHR column of encounters.csv).
         double strongest = 0;
         for (String line : Files.readAllLines(dir.resolve("encounters.csv")).subList(1, 3)) {
             strongest = Math.max(strongest, Double.parseDouble(line.split(",", -1)[10]));
         }
-        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\"all_trails\".*?\"zhr\": ([0-9.]+)",
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\"trails_together\".*?\"zhr\": ([0-9.]+)",
                 java.util.regex.Pattern.DOTALL).matcher(json);
         assertThat(m.find()).isTrue();
         assertThat(Double.parseDouble(m.group(1))).isGreaterThanOrEqualTo(strongest * 0.999);

@@ -83,4 +83,24 @@ class CombinedActivityTest {
         assertThat(c.low()[top]).isLessThanOrEqualTo(c.value()[top]);
         assertThat(c.high()[top]).isGreaterThanOrEqualTo(c.value()[top]);
     }
+
+    /** A meeting with only the fields grouping reads: its peak (days) and FWHM (hours). */
+    private static TrailEncounter meeting(double peakT, double fwhmHours) {
+        return new TrailEncounter(0, 1, peakT, 1, 75, 0, 0, 10, 0, 0, 30, fwhmHours, 1, 0, 1, 0, 10, null);
+    }
+
+    @Test
+    void onlyTrailsWhoseHoursOverlapAreSummed() {
+        // Spans are the peak ± 3 FWHM (at least ± 1 h): A −3..+3 h, B +1.8..+7.8 h overlap; C, 100 days on (a
+        // shower at the other node), stands alone; D's ± 1 h touches neither.
+        TrailEncounter a = meeting(0.0, 1.0);
+        TrailEncounter b = meeting(0.2, 1.0);
+        TrailEncounter c = meeting(100.0, 2.0);
+        TrailEncounter d = meeting(0.5, 0.1);
+        List<List<TrailEncounter>> groups = CombinedActivity.overlapping(List.of(c, b, d, a));
+        assertThat(groups).hasSize(3);
+        assertThat(groups.get(0)).containsExactly(a, b);
+        assertThat(groups.get(1)).containsExactly(d);
+        assertThat(groups.get(2)).containsExactly(c);
+    }
 }
