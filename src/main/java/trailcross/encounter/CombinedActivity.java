@@ -28,6 +28,23 @@ import org.apache.commons.math3.stat.descriptive.rank.Percentile;
 public record CombinedActivity(double[] times, double[] value, double[] low, double[] high, double peakT,
         double peakSigmaMin, double peakValue, double peakValueSigma, int trails) {
 
+    /** Other maxima of the sum are listed from this share of its highest up: a second trail's storm, say. */
+    public static final double LISTED_SHARE = 0.5;
+
+    /**
+     * The sum's other maxima of at least {@value #LISTED_SHARE} of its highest ({@link DensityProfile#otherMaxima}):
+     * where trails met together peak apart, each of their maxima.
+     *
+     * @return per maximum: its time (TDB days since J2000) and its share of the highest
+     */
+    public List<double[]> otherMaxima() {
+        List<double[]> out = new ArrayList<>();
+        for (int j : DensityProfile.otherMaxima(value, LISTED_SHARE)) {
+            out.add(new double[] {times[j], value[j] / peakValue});
+        }
+        return out;
+    }
+
     /** Bootstrap resamples. */
     public static final int RESAMPLES = DensityProfile.RESAMPLES;
     /** At most this many grid points. */

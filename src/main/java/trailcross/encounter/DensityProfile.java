@@ -58,33 +58,46 @@ public final class DensityProfile {
          * @return grid indices, highest first
          */
         public int[] otherMaxima(double share) {
-            int n = value.length;
-            int top = argmax(value);
-            java.util.List<Integer> found = new java.util.ArrayList<>();
-            for (int j = 1; j + 1 < n; j++) {
-                if (j == top || value[j] < share * value[top] || value[j] < value[j - 1] || value[j] < value[j + 1]) {
-                    continue;
+            return DensityProfile.otherMaxima(value, share);
+        }
+    }
+
+    /**
+     * The local maxima of a profile, other than its highest, of at least {@code share} of the highest value,
+     * each set apart from every higher maximum by a dip of at least {@value #DIP} of its own value (its
+     * prominence; a ripple of a kernel sum is not a maximum).
+     *
+     * @param value the profile on its grid
+     * @param share least value, as a share of the highest
+     * @return grid indices, highest first
+     */
+    public static int[] otherMaxima(double[] value, double share) {
+        int n = value.length;
+        int top = argmax(value);
+        java.util.List<Integer> found = new java.util.ArrayList<>();
+        for (int j = 1; j + 1 < n; j++) {
+            if (j == top || value[j] < share * value[top] || value[j] < value[j - 1] || value[j] < value[j + 1]) {
+                continue;
+            }
+            // The deepest dip towards the nearest higher point on each side; the shallower side decides.
+            double prominence = Double.POSITIVE_INFINITY;
+            for (int dir = -1; dir <= 1; dir += 2) {
+                double low = value[j];
+                int k = j + dir;
+                while (k >= 0 && k < n && value[k] <= value[j]) {
+                    low = Math.min(low, value[k]);
+                    k += dir;
                 }
-                // The deepest dip towards the nearest higher point on each side; the shallower side decides.
-                double prominence = Double.POSITIVE_INFINITY;
-                for (int dir = -1; dir <= 1; dir += 2) {
-                    double low = value[j];
-                    int k = j + dir;
-                    while (k >= 0 && k < n && value[k] <= value[j]) {
-                        low = Math.min(low, value[k]);
-                        k += dir;
-                    }
-                    if (k >= 0 && k < n) {
-                        prominence = Math.min(prominence, value[j] - low);
-                    }
-                }
-                if (prominence >= DIP * value[j]) {
-                    found.add(j);
+                if (k >= 0 && k < n) {
+                    prominence = Math.min(prominence, value[j] - low);
                 }
             }
-            found.sort((a, b) -> Double.compare(value[b], value[a]));
-            return found.stream().mapToInt(Integer::intValue).toArray();
+            if (prominence >= DIP * value[j]) {
+                found.add(j);
+            }
         }
+        found.sort((a, b) -> Double.compare(value[b], value[a]));
+        return found.stream().mapToInt(Integer::intValue).toArray();
     }
 
     /** Least dip, as a share of a maximum's value, that sets it apart from a higher one. */

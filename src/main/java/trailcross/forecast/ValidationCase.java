@@ -50,7 +50,7 @@ public record ValidationCase(Path file, String name, Path stream, String command
     /** The quantities a check can name. */
     public static final Set<String> QUANTITIES = Set.of("moid_au", "perihelion_tt", "q_au", "peak_utc",
             "abs_delta_r_au", "radiant", "solar_longitude_deg", "axis_delta_r_au", "axis_peak_utc", "peak_sigma_min",
-            "calibration_round_trip", "transfer_zhr_factor", "axis_solar_longitude_deg");
+            "calibration_round_trip", "transfer_zhr_factor", "axis_solar_longitude_deg", "together_peak_utc");
 
     /**
      * One check.

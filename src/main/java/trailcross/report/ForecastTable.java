@@ -21,6 +21,8 @@ public final class ForecastTable {
 
     /** Below this effective sample size a row is marked unreliable (resampling underestimates its spread). */
     public static final double FEW = 10;
+    /** A trail shapes a sum of trails when its own maximum is at least this share of the sum's. */
+    public static final double SHAPES = 0.1;
 
     private ForecastTable() {
     }
@@ -89,15 +91,23 @@ public final class ForecastTable {
     /** A line for each group of a year's trails whose activity overlaps, when a group holds two or more. */
     private static void combined(PrintWriter o, ForecastRun.Result r, int year) {
         double scale = r.intensityScale();
-        double fewest = r.meetings().stream().filter(m -> m.year() == year && m.cloud() != null)
-                .mapToDouble(m -> m.cloud().ess()).min().orElse(0);
         for (CombinedActivity c : r.combined(year)) {
+            // The trails that shape the sum: met inside its hours, with a tenth of its maximum or more.
+            double[] t = c.times();
+            double fewest = r.meetings().stream().filter(m -> m.year() == year && m.cloud() != null)
+                    .map(ForecastRun.Meeting::cloud)
+                    .filter(m -> m.peakT() >= t[0] && m.peakT() <= t[t.length - 1] && m.zhr() >= SHAPES * c.peakValue())
+                    .mapToDouble(TrailEncounter::ess).min().orElse(Double.POSITIVE_INFINITY);
             o.printf(Locale.ROOT, "%-4d %d trails together: maximum %s UT +- %.0f min, %s %s +- %s%s%n", year,
                     c.trails(), minute(c.peakT()), c.peakSigmaMin(), r.absolute() ? "ZHR" : "rel. intensity",
                     String.format(Locale.ROOT, r.absolute() ? "%.0f" : "%.3f", c.peakValue() * scale),
                     String.format(Locale.ROOT, r.absolute() ? "%.0f" : "%.3f", c.peakValueSigma() * scale),
-                    fewest < FEW ? " (unreliable: a trail that year has fewer than " + (int) FEW
+                    fewest < FEW ? " (unreliable: a trail that shapes it has fewer than " + (int) FEW
                             + " effective particles)" : "");
+            for (double[] x : c.otherMaxima()) {
+                o.printf(Locale.ROOT, "     another maximum of these trails together at %s UT (%.0f%% of the highest)%n",
+                        minute(x[0]), 100 * x[1]);
+            }
         }
     }
 

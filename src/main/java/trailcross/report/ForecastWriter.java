@@ -175,9 +175,11 @@ public final class ForecastWriter {
             for (int y = s.firstYear(); y <= s.lastYear(); y++) {
                 for (CombinedActivity c : r.combined(y)) {
                     together.add(String.format(Locale.ROOT, "    {\"year\": %d, \"trails\": %d, \"peak_utc\": %s, "
-                            + "\"peak_sigma_min\": %s, \"%s\": %s, \"sigma\": %s}", y, c.trails(), json(utc(c.peakT())),
-                            f(c.peakSigmaMin(), 1), r.absolute() ? "zhr" : "relative_intensity",
-                            f(c.peakValue() * scale, r.absolute() ? 1 : 4), f(c.peakValueSigma() * scale, r.absolute() ? 1 : 4)));
+                            + "\"peak_sigma_min\": %s, \"%s\": %s, \"sigma\": %s, \"other_maxima\": [%s]}", y, c.trails(),
+                            json(utc(c.peakT())), f(c.peakSigmaMin(), 1), r.absolute() ? "zhr" : "relative_intensity",
+                            f(c.peakValue() * scale, r.absolute() ? 1 : 4), f(c.peakValueSigma() * scale, r.absolute() ? 1 : 4),
+                            String.join(", ", c.otherMaxima().stream().map(x -> String.format(Locale.ROOT,
+                                    "{\"utc\": %s, \"share_of_peak\": %s}", json(utc(x[0])), f(x[1], 3))).toList())));
                 }
             }
             w.write("  \"trails_together\": [" + (together.isEmpty() ? "],\n" : "\n" + String.join(",\n", together) + "\n  ],\n"));

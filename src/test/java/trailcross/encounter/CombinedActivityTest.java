@@ -103,4 +103,21 @@ class CombinedActivityTest {
         assertThat(groups.get(1)).containsExactly(d);
         assertThat(groups.get(2)).containsExactly(c);
     }
+
+    @Test
+    void trailsThatPeakApartAreBothListed() {
+        // Two equal clumps 0.1 degree (2.4 h) apart, ten times their spread: the sum has a maximum at each, the
+        // second listed at about its full share; a clump of a third of the size between them is not a maximum.
+        double s = 0.01;
+        CombinedActivity.Part a = clump(31, 3000, 50.0, s, 0.0);
+        CombinedActivity.Part b = clump(32, 3000, 50.0, s, 0.1 * H / 24);
+        CombinedActivity c = CombinedActivity.of(List.of(a, b), 8);
+        List<double[]> other = c.otherMaxima();
+        assertThat(other).hasSize(1);
+        assertThat(other.get(0)[1]).isCloseTo(1.0, within(0.1));
+        double[] times = {c.peakT(), other.get(0)[0]};
+        Arrays.sort(times);
+        assertThat(times[0] * 1440).isCloseTo(0.0, within(5.0));
+        assertThat(times[1] * 1440).isCloseTo(0.1 * H * 60, within(5.0));
+    }
 }
