@@ -24,9 +24,12 @@ import org.apache.commons.math3.stat.descriptive.rank.Percentile;
  * @param peakValue the summed profile at its maximum
  * @param peakValueSigma the resampling standard deviation of the summed profile's maximum value
  * @param trails how many trails contribute
+ * @param returns each trail's return (perihelion), TDB days since J2000, in the order of the parts given
+ * @param shareAtPeak each trail's share of the sum at its maximum, in the same order
  */
 public record CombinedActivity(double[] times, double[] value, double[] low, double[] high, double peakT,
-        double peakSigmaMin, double peakValue, double peakValueSigma, int trails) {
+        double peakSigmaMin, double peakValue, double peakValueSigma, int trails, double[] returns,
+        double[] shareAtPeak) {
 
     /** Other maxima of the sum are listed from this share of its highest up: a second trail's storm, say. */
     public static final double LISTED_SHARE = 0.5;
@@ -45,6 +48,24 @@ public record CombinedActivity(double[] times, double[] value, double[] low, dou
         return out;
     }
 
+    /**
+     * The trails that make the maximum: each trail's return and its share of the sum there, largest first, those
+     * of at least {@code least} of it.
+     *
+     * @param least the least share listed
+     * @return rows {return, TDB days since J2000; share}
+     */
+    public List<double[]> makers(double least) {
+        List<double[]> out = new ArrayList<>();
+        for (int k = 0; k < shareAtPeak.length; k++) {
+            if (shareAtPeak[k] >= least) {
+                out.add(new double[] {returns[k], shareAtPeak[k]});
+            }
+        }
+        out.sort((a, b) -> Double.compare(b[1], a[1]));
+        return out;
+    }
+
     /** Bootstrap resamples. */
     public static final int RESAMPLES = DensityProfile.RESAMPLES;
     /** At most this many grid points. */
@@ -58,8 +79,10 @@ public record CombinedActivity(double[] times, double[] value, double[] low, dou
      * @param hLambda the trail's bandwidth in longitude, degrees
      * @param peakLambda a longitude, degrees, on the same unwrapping as {@code lambda}
      * @param peakT the time the Earth is there, TDB days since J2000
+     * @param returnT the trail's return (perihelion), TDB days since J2000 (NaN when not known)
      */
-    public record Part(double[] lambda, double[] contribution, double hLambda, double peakLambda, double peakT) {
+    public record Part(double[] lambda, double[] contribution, double hLambda, double peakLambda, double peakT,
+            double returnT) {
 
         /** @return the longitude (on the part's unwrapping) at which the Earth is at time t, degrees */
         double lambdaAt(double t) {
@@ -113,7 +136,7 @@ public record CombinedActivity(double[] times, double[] value, double[] low, dou
         for (TrailEncounter m : meetings) {
             DensityProfile.Result p = m.profile();
             if (p != null && p.peakValue() > 0 && p.lambda() != null) {
-                parts.add(new Part(p.lambda(), p.contribution(), p.hLambda(), p.peak(), m.peakT()));
+                parts.add(new Part(p.lambda(), p.contribution(), p.hLambda(), p.peak(), m.peakT(), m.returnT()));
             }
         }
         return of(parts, seed);
@@ -193,8 +216,16 @@ public record CombinedActivity(double[] times, double[] value, double[] low, dou
             low[j] = pct.evaluate(16);
             high[j] = pct.evaluate(84);
         }
+        double[] shares = new double[parts.size()];
+        double[] returns = new double[parts.size()];
+        for (int k = 0; k < parts.size(); k++) {
+            returns[k] = parts.get(k).returnT();
+            double[] one = DensityProfile.profile(all[k], parts.get(k).contribution(), parts.get(k).lambda(), grids[k],
+                    parts.get(k).hLambda());
+            shares[k] = one[best] / sum[best];
+        }
         return new CombinedActivity(times, sum, low, high, DensityProfile.refine(times, sum, best),
-                DensityProfile.sd(peaks) * 1440, sum[best], DensityProfile.sd(maxima), parts.size());
+                DensityProfile.sd(peaks) * 1440, sum[best], DensityProfile.sd(maxima), parts.size(), returns, shares);
     }
 
     /** The trails' profiles at the grid's times, from the crossings picked in each. */

@@ -104,6 +104,9 @@ public final class ForecastTable {
                     String.format(Locale.ROOT, r.absolute() ? "%.0f" : "%.3f", c.peakValueSigma() * scale),
                     fewest < FEW ? " (unreliable: a trail that shapes it has fewer than " + (int) FEW
                             + " effective particles)" : "");
+            java.util.List<String> makers = c.makers(SHAPES).stream().map(x -> String.format(Locale.ROOT, "%d trail %.0f%%",
+                    trailcross.forecast.ParentReturns.yearOf(x[0]), 100 * x[1])).toList();
+            o.printf(Locale.ROOT, "     at that maximum: %s%n", String.join(", ", makers));
             for (double[] x : c.otherMaxima()) {
                 o.printf(Locale.ROOT, "     another maximum of these trails together at %s UT (%.0f%% of the highest)%n",
                         minute(x[0]), 100 * x[1]);

@@ -175,9 +175,13 @@ public final class ForecastWriter {
             for (int y = s.firstYear(); y <= s.lastYear(); y++) {
                 for (CombinedActivity c : r.combined(y)) {
                     together.add(String.format(Locale.ROOT, "    {\"year\": %d, \"trails\": %d, \"peak_utc\": %s, "
-                            + "\"peak_sigma_min\": %s, \"%s\": %s, \"sigma\": %s, \"other_maxima\": [%s]}", y, c.trails(),
+                            + "\"peak_sigma_min\": %s, \"%s\": %s, \"sigma\": %s, \"shares_at_peak\": [%s], "
+                            + "\"other_maxima\": [%s]}", y, c.trails(),
                             json(utc(c.peakT())), f(c.peakSigmaMin(), 1), r.absolute() ? "zhr" : "relative_intensity",
                             f(c.peakValue() * scale, r.absolute() ? 1 : 4), f(c.peakValueSigma() * scale, r.absolute() ? 1 : 4),
+                            String.join(", ", c.makers(0).stream().map(x -> String.format(Locale.ROOT,
+                                    "{\"return_year\": %d, \"share\": %s}", trailcross.forecast.ParentReturns.yearOf(x[0]),
+                                    f(x[1], 3))).toList()),
                             String.join(", ", c.otherMaxima().stream().map(x -> String.format(Locale.ROOT,
                                     "{\"utc\": %s, \"share_of_peak\": %s}", json(utc(x[0])), f(x[1], 3))).toList())));
                 }

@@ -61,7 +61,8 @@ class ForecastCommandTest {
         MainTest.Run r = MainTest.run("forecast", "streams/lysandre.toml", "--year", "2027", "--returns", "2",
                 "--particles", "300", "--out", dir.toString());
         assertThat(r.code()).as(r.err()).isZero();
-        assertThat(r.out()).contains("2027 2 trails together: maximum 2027-06-");
+        assertThat(r.out()).contains("2027 2 trails together: maximum 2027-06-").contains("     at that maximum: ");
+        assertThat(Files.readString(dir.resolve("summary.json"))).contains("\"shares_at_peak\": [{\"return_year\": ");
         String json = Files.readString(dir.resolve("summary.json"));
         assertThat(json).contains("\"trails_together\": [\n    {\"year\": 2027, \"trails\": 2, \"peak_utc\": \"2027-06-");
         // The sum's maximum is at least the stronger trail's (ZHR column of encounters.csv).

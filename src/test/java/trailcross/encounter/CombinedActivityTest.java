@@ -30,7 +30,7 @@ class CombinedActivityTest {
         }
         double[] w = new double[n];
         Arrays.fill(w, 1.0);
-        return new CombinedActivity.Part(lambda, c, DensityProfile.bandwidth(lambda, w), centre, atT);
+        return new CombinedActivity.Part(lambda, c, DensityProfile.bandwidth(lambda, w), centre, atT, seed);
     }
 
     private static double normal(double x, double s) {
@@ -55,11 +55,14 @@ class CombinedActivityTest {
         DensityProfile.Result p = DensityProfile.of(dr, lon, w, v, 5);
         double peakT = 9999.25;
         CombinedActivity c = CombinedActivity.of(List.of(new CombinedActivity.Part(p.lambda(), p.contribution(),
-                p.hLambda(), p.peak(), peakT)), 6);
+                p.hLambda(), p.peak(), peakT, 1899)), 6);
         double step = p.hLambda() / 6 * H / 24;
         assertThat(c.peakT()).isCloseTo(peakT, within(step));
         assertThat(c.peakValue() / p.peakValue()).isCloseTo(1.0, within(1e-3));
         assertThat(c.trails()).isEqualTo(1);
+        assertThat(c.makers(0.1)).hasSize(1);
+        assertThat(c.makers(0.1).get(0)[0]).isEqualTo(1899);
+        assertThat(c.makers(0.1).get(0)[1]).isCloseTo(1.0, within(1e-12));
     }
 
     @Test
@@ -78,6 +81,10 @@ class CombinedActivityTest {
         double expected = normal(d / 2, Math.hypot(s, a.hLambda())) + normal(d / 2, Math.hypot(s, b.hLambda()));
         assertThat(c.peakValue()).isCloseTo(expected, within(4 * c.peakValueSigma()));
         assertThat(c.peakValueSigma() / c.peakValue()).isLessThan(0.05);
+        // At the midpoint each makes about half the sum, and the shares add up to the whole.
+        assertThat(c.shareAtPeak()[0]).isCloseTo(0.5, within(0.1));
+        assertThat(c.shareAtPeak()[0] + c.shareAtPeak()[1]).isCloseTo(1.0, within(1e-9));
+        assertThat(c.makers(0.1)).hasSize(2);
         // The bands hold the profile at its maximum.
         int top = DensityProfile.argmax(c.value());
         assertThat(c.low()[top]).isLessThanOrEqualTo(c.value()[top]);
@@ -119,5 +126,8 @@ class CombinedActivityTest {
         Arrays.sort(times);
         assertThat(times[0] * 1440).isCloseTo(0.0, within(5.0));
         assertThat(times[1] * 1440).isCloseTo(0.1 * H * 60, within(5.0));
+        // Ten spreads apart, the maximum is one trail's alone.
+        assertThat(c.makers(0.1)).hasSize(1);
+        assertThat(c.makers(0.1).get(0)[1]).isGreaterThan(0.99);
     }
 }
