@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.apache.commons.math3.random.Well19937c;
-import org.apache.commons.math3.stat.descriptive.rank.Percentile;
 
 /**
  * The shower's activity in one year from all its trails together, as an observer counts it: the sum of the
@@ -23,13 +22,16 @@ import org.apache.commons.math3.stat.descriptive.rank.Percentile;
  * @param peakSigmaMin the maximum's resampling standard deviation, minutes
  * @param peakValue the summed profile at its maximum
  * @param peakValueSigma the resampling standard deviation of the summed profile's maximum value
- * @param trails how many trails contribute
  * @param returns each trail's return (perihelion), TDB days since J2000, in the order of the parts given
  * @param shareAtPeak each trail's share of the sum at its maximum, in the same order
  */
 public record CombinedActivity(double[] times, double[] value, double[] low, double[] high, double peakT,
-        double peakSigmaMin, double peakValue, double peakValueSigma, int trails, double[] returns,
-        double[] shareAtPeak) {
+        double peakSigmaMin, double peakValue, double peakValueSigma, double[] returns, double[] shareAtPeak) {
+
+    /** @return how many trails contribute */
+    public int trails() {
+        return returns.length;
+    }
 
     /** Other maxima of the sum are listed from this share of its highest up: a second trail's storm, say. */
     public static final double LISTED_SHARE = 0.5;
@@ -129,7 +131,7 @@ public record CombinedActivity(double[] times, double[] value, double[] low, dou
      * @param meetings cloud meetings whose activity overlaps ({@link #overlapping}; those without a profile
      *        value are left out)
      * @param seed the bootstrap's seed
-     * @return their summed activity, or null when none has a non-zero profile
+     * @return their summed activity, or null when fewer than two of them have a non-zero profile
      */
     public static CombinedActivity ofMeetings(List<TrailEncounter> meetings, long seed) {
         List<Part> parts = new ArrayList<>();
@@ -139,7 +141,7 @@ public record CombinedActivity(double[] times, double[] value, double[] low, dou
                 parts.add(new Part(p.lambda(), p.contribution(), p.hLambda(), p.peak(), m.peakT(), m.returnT()));
             }
         }
-        return of(parts, seed);
+        return parts.size() < 2 ? null : of(parts, seed);
     }
 
     /**
@@ -180,7 +182,16 @@ public record CombinedActivity(double[] times, double[] value, double[] low, dou
                 all[k][i] = i;
             }
         }
-        double[] sum = sum(parts, grids, all);
+        // Each trail's own profile, kept for its share at the maximum; the sum adds them in order, as sum() does.
+        double[][] own = new double[parts.size()][];
+        double[] sum = new double[m];
+        for (int k = 0; k < parts.size(); k++) {
+            Part p = parts.get(k);
+            own[k] = DensityProfile.profile(all[k], p.contribution(), p.lambda(), grids[k], p.hLambda());
+            for (int j = 0; j < m; j++) {
+                sum[j] += own[k][j];
+            }
+        }
         int best = DensityProfile.argmax(sum);
         if (!(sum[best] > 0)) {
             return null;
@@ -204,28 +215,15 @@ public record CombinedActivity(double[] times, double[] value, double[] low, dou
             maxima[b] = s[top];
             boots[b] = s;
         }
-        double[] low = new double[m];
-        double[] high = new double[m];
-        double[] column = new double[RESAMPLES];
-        Percentile pct = new Percentile().withEstimationType(Percentile.EstimationType.R_7);
-        for (int j = 0; j < m; j++) {
-            for (int b = 0; b < RESAMPLES; b++) {
-                column[b] = boots[b][j];
-            }
-            pct.setData(column);
-            low[j] = pct.evaluate(16);
-            high[j] = pct.evaluate(84);
-        }
+        double[][] band = DensityProfile.bands(boots);
         double[] shares = new double[parts.size()];
         double[] returns = new double[parts.size()];
         for (int k = 0; k < parts.size(); k++) {
             returns[k] = parts.get(k).returnT();
-            double[] one = DensityProfile.profile(all[k], parts.get(k).contribution(), parts.get(k).lambda(), grids[k],
-                    parts.get(k).hLambda());
-            shares[k] = one[best] / sum[best];
+            shares[k] = own[k][best] / sum[best];
         }
-        return new CombinedActivity(times, sum, low, high, DensityProfile.refine(times, sum, best),
-                DensityProfile.sd(peaks) * 1440, sum[best], DensityProfile.sd(maxima), parts.size(), returns, shares);
+        return new CombinedActivity(times, sum, band[0], band[1], DensityProfile.refine(times, sum, best),
+                DensityProfile.sd(peaks) * 1440, sum[best], DensityProfile.sd(maxima), returns, shares);
     }
 
     /** The trails' profiles at the grid's times, from the crossings picked in each. */

@@ -185,23 +185,39 @@ public final class DensityProfile {
             maxima[b] = p[k];
             boots[b] = p;
         }
-        double[] low = new double[m];
-        double[] high = new double[m];
-        double[] col = new double[RESAMPLES];
-        for (int j = 0; j < m; j++) {
-            for (int b = 0; b < RESAMPLES; b++) {
-                col[b] = boots[b][j];
-            }
-            Arrays.sort(col);
-            low[j] = col[(int) Math.floor(0.16 * (RESAMPLES - 1))];
-            high[j] = col[(int) Math.ceil(0.84 * (RESAMPLES - 1))];
-        }
+        double[][] band = bands(boots);
+        double[] low = band[0];
+        double[] high = band[1];
         double[] fed = new double[n];
         for (int i = 0; i < n; i++) {
             fed[i] = Math.abs(c[i]);
         }
         return new Result(grid, prof, low, high, peak, peakValue, sd(peaks), sd(maxima), hR, hL, fwhm,
                 kish(fed), x, c);
+    }
+
+    /**
+     * The 16th and 84th percentiles at each grid point of bootstrap profiles (order statistics of the sorted
+     * resamples, the lower rounded down and the upper up).
+     *
+     * @param boots the resampled profiles, all on one grid
+     * @return {low, high}
+     */
+    static double[][] bands(double[][] boots) {
+        int r = boots.length;
+        int m = boots[0].length;
+        double[] low = new double[m];
+        double[] high = new double[m];
+        double[] col = new double[r];
+        for (int j = 0; j < m; j++) {
+            for (int b = 0; b < r; b++) {
+                col[b] = boots[b][j];
+            }
+            Arrays.sort(col);
+            low[j] = col[(int) Math.floor(0.16 * (r - 1))];
+            high[j] = col[(int) Math.ceil(0.84 * (r - 1))];
+        }
+        return new double[][] {low, high};
     }
 
     /**

@@ -120,7 +120,7 @@ public final class ForecastPlots {
                 continue;
             }
             YIntervalSeries s = new YIntervalSeries(mt.returnYear() + " trail");
-            double half = Math.max(3 * m.fwhmHours(), 1.0) / 24;
+            double half = trailcross.encounter.CombinedActivity.halfSpanDays(m);
             double[] t = m.profileTimes();
             var prof = m.profile();
             for (int k = 0; k < t.length; k++) {
