@@ -168,6 +168,20 @@ final class BenchCommand implements Callable<Integer> {
                     f.vsUniformDraws());
             lines.append(f.line()).append('\n');
         }
+        int focusedParticles = quick ? 1000 : 5000;
+        out.printf(Locale.ROOT, "under a proposal (3 days in P0, floor 0.001), %d particles: the band of directions against "
+                + "keeping the law's candidates by their acceptance%n", focusedParticles);
+        for (int t : threads) {
+            List<trailcross.ejection.EjectionBenchmark.Figure> f = bench.focused(focusedParticles, t);
+            for (var x : f) {
+                out.printf(Locale.ROOT, "%-18s %6d %18.0f %21.1fx%n", x.variant(), x.threads(), x.particlesPerSecond(),
+                        x.vsUniformDraws());
+                lines.append(x.line()).append('\n');
+            }
+            double gain = f.get(0).particlesPerSecond() / f.get(1).particlesPerSecond();
+            out.printf(Locale.ROOT, "band gain %.1fx%n", gain);
+            lines.append(String.format(Locale.ROOT, "bench eject focused-gain threads=%d ratio=%.2f%n", t, gain));
+        }
         out.print(lines);
         out.flush();
     }

@@ -33,9 +33,23 @@ public final class DirectionSampler {
      */
     public void direction(double u1, double u2, double[] position, double[] out) {
         double r = Math.sqrt(position[0] * position[0] + position[1] * position[1] + position[2] * position[2]);
-        double ax = -position[0] / r;
-        double ay = -position[1] / r;
-        double az = -position[2] / r;
+        double[] axis = {-position[0] / r, -position[1] / r, -position[2] / r};
+        around(axis, 1 - u1 * (1 - cosMax), 2 * Math.PI * u2, out);
+    }
+
+    /**
+     * The unit vector at a given cosine from an axis and a given azimuth about it (the azimuth's origin is
+     * fixed by the axis alone).
+     *
+     * @param axis a unit vector
+     * @param c the cosine of the angle from the axis, in [−1, 1]
+     * @param phi the azimuth, radians
+     * @param out receives the unit vector
+     */
+    public static void around(double[] axis, double c, double phi, double[] out) {
+        double ax = axis[0];
+        double ay = axis[1];
+        double az = axis[2];
         // Two unit vectors perpendicular to the axis; the helper is the coordinate axis least aligned.
         double hx = 0;
         double hy = 0;
@@ -57,9 +71,7 @@ public final class DirectionSampler {
         double e2x = ay * e1z - az * e1y;
         double e2y = az * e1x - ax * e1z;
         double e2z = ax * e1y - ay * e1x;
-        double c = 1 - u1 * (1 - cosMax);
         double s = Math.sqrt(Math.max(0, 1 - c * c));
-        double phi = 2 * Math.PI * u2;
         double cp = Math.cos(phi) * s;
         double sp = Math.sin(phi) * s;
         out[0] = c * ax + cp * e1x + sp * e2x;

@@ -22,7 +22,8 @@ import trailcross.time.Epoch;
  * The standard ejection workload: an invented Halley-type parent (q 0.95 au, e 0.91, i 140°) integrated
  * with the planets over its return, active inside 3 au, Jones (1995) speeds, sunlit directions, five
  * stratified size bins from 0.1 mm to 1 cm. It times the generator (pseudo-random and Sobol) against the
- * bare cost of drawing its four uniform numbers per particle, measured in the same run.
+ * bare cost of drawing its four uniform numbers per particle, measured in the same run, and a proposal's
+ * draws on the band of directions against plain rejection.
  */
 public final class EjectionBenchmark {
 
@@ -78,6 +79,33 @@ public final class EjectionBenchmark {
             }
         }
         return out;
+    }
+
+    /**
+     * A proposal like a forecast's main stage (a Gaussian of 3 days in P0 about the law's median period, floor
+     * 0.001) drawn on the band of directions that reach it ({@link PeriodBand}) and, as the baseline in the same
+     * run, by keeping each candidate of the ejection law with its acceptance.
+     *
+     * @param particles particles per timed run
+     * @param threads worker threads
+     * @return the band's figure, then the baseline's (their time ratio is the band's gain)
+     */
+    public List<Figure> focused(int particles, int threads) {
+        List<Meteoroid> law = generator.generate(20_000, 4L, false, threads);
+        double[] p0 = law.stream().mapToDouble(m -> ParticleGenerator.periodAtEjection(m.state(), m.beta())).sorted()
+                .toArray();
+        EjectionFocus focus = EjectionFocus.around(p0[p0.length / 2], 3.0, 0.001);
+        generator.generate(Math.max(1, particles / 10), 1L, false, threads, focus, 0, null);
+        generator.generateByRejection(Math.max(1, particles / 10), 1L, threads, focus);
+        double drawNs = uniformDraws(200_000);
+        long t0 = System.nanoTime();
+        generator.generate(particles, 5L, false, threads, focus, 0, null);
+        double band = (System.nanoTime() - t0) / (double) particles;
+        t0 = System.nanoTime();
+        generator.generateByRejection(particles, 5L, threads, focus);
+        double plain = (System.nanoTime() - t0) / (double) particles;
+        return List.of(new Figure("focused-band", threads, 1e9 / band, band / drawNs),
+                new Figure("focused-rejection", threads, 1e9 / plain, plain / drawNs));
     }
 
     /** Nanoseconds per particle to draw four WELL19937c uniforms, the generator's least possible cost. */

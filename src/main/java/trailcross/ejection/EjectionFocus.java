@@ -265,6 +265,33 @@ public record EjectionFocus(double lo, double step, double[] values, double floo
     }
 
     /**
+     * The periods outside which the acceptance is the floor: the grid points beside the first and the last
+     * value above the floor (the table is interpolated linearly, so it exceeds the floor only between them).
+     *
+     * @return {least, greatest} period, days, or null when the acceptance is the floor everywhere (and for
+     *     the prior)
+     */
+    public double[] periodSupport() {
+        if (isPrior()) {
+            return null;
+        }
+        int first = -1;
+        int last = -1;
+        for (int j = 0; j < values.length; j++) {
+            if (values[j] > floor) {
+                if (first < 0) {
+                    first = j;
+                }
+                last = j;
+            }
+        }
+        if (first < 0) {
+            return null;
+        }
+        return new double[] {lo + Math.max(0, first - 1) * step, lo + Math.min(values.length - 1, last + 1) * step};
+    }
+
+    /**
      * A focus learned from periods that reached the target: a weighted Gaussian kernel density of them with the
      * bandwidth given (the caller's choice, e.g. Silverman's rule of thumb), scaled so that its maximum is 1,
      * then lifted to the floor: a = floor + (1 − floor) f / max f.

@@ -142,7 +142,20 @@ class ParticleGeneratorTest {
         int n = 300_000;
         List<Meteoroid> prior = g.generate(n, 21L, false, 2);
         double[] p0 = prior.stream().mapToDouble(m -> ParticleGenerator.periodAtEjection(m.state(), m.beta())).sorted().toArray();
-        EjectionFocus focus = EjectionFocus.around(p0[n / 2], 3.0, 1e-9);
+        double[] node = prior.stream().mapToDouble(m -> EjectionFocus.Features.of(m.state(), m.beta()).nodeDescendingAu())
+                .filter(Double::isFinite).sorted().toArray();
+        double spread = node[(int) (0.75 * node.length)] - node[(int) (0.25 * node.length)];
+        EjectionFocus inPeriod = EjectionFocus.around(p0[n / 2], 3.0, 1e-9);
+        // The same with a node model (its acceptance depends on the whole direction, not only on the band's μ).
+        EjectionFocus.NodeModel model = new EjectionFocus.NodeModel(false, 0, 1, 0, 0, node[node.length / 2], 0,
+                0.5 * spread, 1);
+        for (EjectionFocus focus : List.of(inPeriod, inPeriod.withNode(model))) {
+            checkNormalisingConstant(g, prior, focus);
+        }
+    }
+
+    private static void checkNormalisingConstant(ParticleGenerator g, List<Meteoroid> prior, EjectionFocus focus) {
+        int n = prior.size();
         int bins = 3;
         double[] sum = new double[bins];
         double[] sum2 = new double[bins];
@@ -243,5 +256,126 @@ class ParticleGeneratorTest {
         assertThat(cloud).allSatisfy(m -> assertThat(m.t()).isBetween(arc.start(), arc.end()));
         double[] v = cloud.stream().mapToDouble(Meteoroid::speedMs).toArray();
         assertThat(Arrays.stream(v).min().orElseThrow()).isPositive();
+    }
+
+    @Test
+    void aFocusedCloudFollowsThePriorTimesTheAcceptance() {
+        // The band's envelope (PeriodBand) must draw exactly q = p a / Z, the law of keeping each prior candidate
+        // with probability a. Checked against that definition: per size bin, the a-weighted share of prior
+        // particles (Commons Math's WELL generator, plain draws) in quintile cells of P0, ejection time, beta and
+        // the descending node's distance, against the focused cloud's share; every cell within 4.5 combined
+        // sigma. Three direction laws (the cap's rejection), a focus in P0 with a node model (a acceptance that
+        // depends on the whole direction) and in P0 alone.
+        Elements el = halleyType();
+        for (DirectionLaw law : DirectionLaw.values()) {
+            EjectionSettings ej = new EjectionSettings(VelocityModel.JONES_1995, 1.0, 0, law, 45, 3.0, 3.0, 2.0, null, null);
+            StreamDefinition d = stream(el, ej, new ParticleSettings(1e-4, 1e-2, 1000.0, 2.0, 1.0, 3, true), 1000.0);
+            ParentHistory h = twoBodyHistory(d, T - 1500, T + 1500);
+            ParticleGenerator g = new ParticleGenerator(d, h, ActiveArc.find(h, T, el, d.ejection()));
+            List<Meteoroid> pilot = g.generate(30_000, 3L, false, 2);
+            double[] p0 = pilot.stream().mapToDouble(m -> ParticleGenerator.periodAtEjection(m.state(), m.beta())).sorted()
+                    .toArray();
+            double[] node = pilot.stream().mapToDouble(m -> EjectionFocus.Features.of(m.state(), m.beta()).nodeDescendingAu())
+                    .filter(Double::isFinite).sorted().toArray();
+            EjectionFocus inPeriod = EjectionFocus.around(p0[p0.length / 2], 4.0, 0.002);
+            double spread = node[(int) (0.75 * node.length)] - node[(int) (0.25 * node.length)];
+            EjectionFocus.NodeModel model = new EjectionFocus.NodeModel(false, 0, 1, 0, 0, node[node.length / 2], 0,
+                    0.3 * spread, 1);
+            for (EjectionFocus focus : List.of(inPeriod, inPeriod.withNode(model))) {
+                checkFocusedLaw(g, focus, law + (focus.node() == null ? ", P0 alone" : ", P0 and node"));
+            }
+        }
+    }
+
+    /** Compares a focused cloud with the a-weighted prior, cell by cell (see the test above). */
+    private static void checkFocusedLaw(ParticleGenerator g, EjectionFocus focus, String what) {
+        int bins = g.sizes().bins();
+        int functions = 4;
+        java.util.function.BiFunction<Meteoroid, Integer, Double> f = (m, j) -> switch (j) {
+            case 0 -> ParticleGenerator.periodAtEjection(m.state(), m.beta());
+            case 1 -> m.t();
+            case 2 -> m.beta();
+            default -> {
+                double r = EjectionFocus.Features.of(m.state(), m.beta()).nodeDescendingAu();
+                yield Double.isFinite(r) ? r : -1.0;
+            }
+        };
+        // The a-weighted prior, 5 chunks of 200,000 plain particles.
+        List<double[]> rows = new java.util.ArrayList<>();
+        for (int chunk = 0; chunk < 5; chunk++) {
+            List<Meteoroid> prior = g.generate(200_000, 100L + chunk, false, 2);
+            for (int i = 0; i < prior.size(); i++) {
+                Meteoroid m = prior.get(i);
+                double a = focus.acceptance(m.state(), m.beta());
+                rows.add(new double[] {g.binOf(i, prior.size(), null), a, f.apply(m, 0), f.apply(m, 1), f.apply(m, 2),
+                        f.apply(m, 3)});
+            }
+        }
+        List<Meteoroid> focused = g.generate(6000, 77L, false, 2, focus, 0, null);
+        double worst = 0;
+        for (int j = 0; j < functions; j++) {
+            final int col = 2 + j;
+            // Quintile edges of the a-weighted prior, all bins together.
+            double[][] sorted = rows.stream().map(r -> new double[] {r[col], r[1]}).sorted((x, y) -> Double.compare(x[0], y[0]))
+                    .toArray(double[][]::new);
+            double total = Arrays.stream(sorted).mapToDouble(x -> x[1]).sum();
+            double[] edges = new double[4];
+            double acc = 0;
+            int e = 0;
+            for (double[] x : sorted) {
+                acc += x[1];
+                while (e < 4 && acc >= (e + 1) * total / 5) {
+                    edges[e++] = x[0];
+                }
+            }
+            for (int k = 0; k < bins; k++) {
+                double[] w = new double[5];
+                double[] w2 = new double[5];
+                double sum = 0;
+                for (double[] r : rows) {
+                    if (r[0] == k) {
+                        int cell = cell(r[col], edges);
+                        w[cell] += r[1];
+                        sum += r[1];
+                    }
+                }
+                int[] n = new int[5];
+                int nk = 0;
+                for (int i = 0; i < focused.size(); i++) {
+                    if (g.binOf(i, focused.size(), null) == k) {
+                        n[cell(f.apply(focused.get(i), j), edges)]++;
+                        nk++;
+                    }
+                }
+                for (int c = 0; c < 5; c++) {
+                    double share = w[c] / sum;
+                    for (double[] r : rows) {
+                        if (r[0] == k) {
+                            double d = (cell(r[col], edges) == c ? 1 : 0) - share;
+                            w2[c] += r[1] * r[1] * d * d;
+                        }
+                    }
+                    double var = w2[c] / (sum * sum) + share * (1 - share) / nk;
+                    if (share == 0 || share == 1) {
+                        // A cell this bin's sizes never reach, or all they reach (beta follows the size).
+                        assertThat(n[c]).as("%s: function %d, bin %d, cell %d", what, j, k, c).isEqualTo(share == 0 ? 0 : nk);
+                        continue;
+                    }
+                    double z = (n[c] / (double) nk - share) / Math.sqrt(var);
+                    worst = Math.max(worst, Math.abs(z));
+                    assertThat(Math.abs(z)).as("%s: function %d, bin %d, cell %d: focused %.4f, prior x a %.4f", what, j, k,
+                            c, n[c] / (double) nk, share).isLessThan(4.5);
+                }
+            }
+        }
+        System.out.printf("%s: largest |z| over the cells %.2f%n", what, worst);
+    }
+
+    private static int cell(double x, double[] edges) {
+        int c = 0;
+        while (c < edges.length && x > edges[c]) {
+            c++;
+        }
+        return c;
     }
 }
