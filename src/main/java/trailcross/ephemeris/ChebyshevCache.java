@@ -235,6 +235,10 @@ public final class ChebyshevCache implements Ephemeris {
             for (int k = indexOf(i, a), end = indexOf(i, b); k <= end; k++) {
                 if (blocks[i].get(k) == null) {
                     (i == SUN_ITEM ? sun : planets).add(new int[] {i, k});
+                    if (onLattice(i)) {
+                        // One job per chunk: its first missing block fits the whole chunk.
+                        k = (k / CHUNK + 1) * CHUNK - 1;
+                    }
                 }
             }
         }
@@ -272,7 +276,19 @@ public final class ChebyshevCache implements Ephemeris {
         return index;
     }
 
+    /** Blocks fitted together from one lattice of the planetary theory ({@link #fitChunk}). */
+    static final int CHUNK = 32;
+
+    /** @return whether item i's blocks come from lattices of the VSOP87 series (a planet or the EMB) */
+    private boolean onLattice(int i) {
+        return source instanceof Vsop87Ephemeris && i < PLANETS;
+    }
+
     private double[] fit(int i, int index) {
+        if (onLattice(i)) {
+            fitChunk(i, index / CHUNK);
+            return blocks[i].get(index);
+        }
         int n = COEFFS[i];
         double length = LENGTH[i];
         double start = blockStart(i, index);
@@ -295,6 +311,51 @@ public final class ChebyshevCache implements Ephemeris {
                 source.heliocentricPosition(ITEMS[i], t, values[j]);
             }
         }
+        return store(i, index, values);
+    }
+
+    /**
+     * Fits the blocks CHUNK·chunk … CHUNK·chunk + CHUNK − 1 of a planet or the EMB (those inside the span) from
+     * one lattice of the series' values at their nodes ({@link Vsop87Ephemeris#positionsOnLattice}: about 6
+     * times fewer operations than a full evaluation per node). Neighbouring blocks share their boundary node's
+     * value, so they join exactly: inside the chunk from the lattice, at the chunk's two ends from the series
+     * evaluated there in full (as the neighbouring chunks do). Which blocks a chunk holds, and so every
+     * coefficient, does not depend on which block was asked for first.
+     */
+    private void fitChunk(int i, int chunk) {
+        int first = chunk * CHUNK;
+        int count = Math.min(CHUNK, lastIndex[i] + 1 - first);
+        int n = COEFFS[i];
+        double length = LENGTH[i];
+        // Per row: the block's start, then its interior nodes (the end is the next row's start).
+        double[] offsets = new double[n - 1];
+        for (int j = 1; j < n - 1; j++) {
+            offsets[j] = 0.5 * length * (nodes[i][j] + 1);
+        }
+        double[][] lattice = new double[count * (n - 1)][3];
+        ((Vsop87Ephemeris) source).positionsOnLattice(ITEMS[i], blockStart(i, first), length, count, offsets, lattice);
+        source.heliocentricPosition(ITEMS[i], blockStart(i, first), lattice[0]);
+        double[] end = new double[3];
+        source.heliocentricPosition(ITEMS[i], blockStart(i, first + count), end);
+        for (int b = 0; b < count; b++) {
+            if (blocks[i].get(first + b) != null) {
+                continue;
+            }
+            double[][] values = new double[n][];
+            int row = b * (n - 1);
+            values[0] = b + 1 < count ? lattice[row + n - 1] : end;
+            for (int j = 1; j < n - 1; j++) {
+                values[j] = lattice[row + j];
+            }
+            values[n - 1] = lattice[row];
+            store(i, first + b, values);
+        }
+    }
+
+    /** The block's coefficients from its values at the nodes, kept unless another thread stored it first. */
+    private double[] store(int i, int index, double[][] values) {
+        int n = COEFFS[i];
+        double length = LENGTH[i];
         // Interpolation on the Lobatto points x_j = cos(πj/N), N = n − 1 (discrete cosine transform of type I):
         // c_k = (2/N) Σ'' f_j cos(πjk/N), the end terms halved in the sum, and c_0, c_N halved.
         int big = n - 1;

@@ -85,6 +85,37 @@ public final class Vsop87Ephemeris implements Ephemeris {
         }
     }
 
+    /**
+     * Heliocentric positions of a planet or the Earth–Moon barycentre on a lattice of times
+     * t = start + j·step + offsets[i] ({@link Vsop87Series#positionsOnLattice}; the barycentre adds the Moon's
+     * share at each time, from Moon98).
+     *
+     * @param body a planet of VSOP87B or {@link Body#EARTH_MOON_BARYCENTRE}
+     * @param start the first row, TDB days since J2000
+     * @param step days between rows
+     * @param count rows
+     * @param offsets offsets within a row, days
+     * @param out receives x, y, z of time (j, i) at {@code out[j * offsets.length + i]}
+     */
+    public void positionsOnLattice(Body body, double start, double step, int count, double[] offsets, double[][] out) {
+        checkSpan(start);
+        boolean emb = body == Body.EARTH_MOON_BARYCENTRE;
+        series.positionsOnLattice(Vsop87Series.indexOf(emb ? Body.EARTH : body), start, step, count, offsets, out);
+        if (emb) {
+            double[] moon = new double[6];
+            for (int j = 0, p = 0; j < count; j++) {
+                for (int i = 0; i < offsets.length; i++, p++) {
+                    double t = start + j * step + offsets[i];
+                    checkSpan(t);
+                    moonGeocentric(t, moon);
+                    for (int k = 0; k < 3; k++) {
+                        out[p][k] += MOON_FRACTION * moon[k];
+                    }
+                }
+            }
+        }
+    }
+
     @Override
     public void moonGeocentricPosition(double t, double[] out) {
         checkSpan(t);
