@@ -21,7 +21,8 @@ import org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression;
  *       planets move a trail's neighbouring particles alike, so the differences at ejection carry through),
  *       and the shape s_R = exp(−½ (δr̂/width)²) favours particles that reach the Earth's path itself.</li>
  * </ul>
- * a = floor + (1 − floor) s_P s_R.
+ * a = floor + (1 − floor) s_P s_R: the floor wherever s_P = 0, which {@link PeriodBand} relies on (it draws
+ * only directions that reach the periods of {@link #periodSupport()}).
  *
  * @param lo the grid's first period, days
  * @param step the grid spacing, days

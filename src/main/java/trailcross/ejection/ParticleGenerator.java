@@ -488,6 +488,8 @@ public final class ParticleGenerator {
             double bound = band.bound(bin, cell);
             // The time from the law inside the cell (its slice of the production's probability).
             if (base(bin, (cell + rng.nextDouble()) / PeriodBand.CELLS, u1, s, c)) {
+                // Only a run of grains it cannot lift says the model lifts none (a narrow band takes many draws).
+                stuck = 0;
                 band.limits(s, c[SPEED] * M_S_TO_AU_D, c[BETA], mu);
                 double mass = band.mass(mu[1] - mu[0]);
                 if (mass > bound) {
