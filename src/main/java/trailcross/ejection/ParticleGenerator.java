@@ -458,8 +458,7 @@ public final class ParticleGenerator {
             if (candidate(bin, u, s, dir, c)) {
                 // The prior keeps every candidate without a draw, so that its cloud is the plain one bit for bit.
                 if (focus.isPrior() || rng.nextDouble() < focus.acceptance(s, c[BETA])) {
-                    return new Meteoroid(id, arc.perihelion(), c[TIME], s.clone(), c[RADIUS], c[MASS], c[BETA], weight,
-                            c[SPEED]);
+                    return particle(id, weight, s, c);
                 }
             } else if (++stuck == MAX_REDRAWS) {
                 throw cannotLift();
@@ -491,13 +490,13 @@ public final class ParticleGenerator {
                 // Only a run of grains it cannot lift says the model lifts none (a narrow band takes many draws).
                 stuck = 0;
                 band.limits(s, c[SPEED] * M_S_TO_AU_D, c[BETA], mu);
-                double mass = band.mass(mu[1] - mu[0]);
-                if (mass > bound) {
+                double envelope = band.mass(mu[1] - mu[0]);
+                if (envelope > bound) {
                     throw new IllegalStateException(String.format(java.util.Locale.ROOT,
-                            "targeted ejection: a candidate's envelope %.6g exceeds its bound %.6g", mass, bound));
+                            "targeted ejection: a candidate's envelope %.6g exceeds its bound %.6g", envelope, bound));
                 }
-                if (rng.nextDouble() * bound < mass) {
-                    if (rng.nextDouble() * mass < floor) {
+                if (rng.nextDouble() * bound < envelope) {
+                    if (rng.nextDouble() * envelope < floor) {
                         directions.direction(rng.nextDouble(), rng.nextDouble(), s, dir);
                         eject(s, dir, c[SPEED]);
                         return particle(id, weight, s, c);
