@@ -240,6 +240,7 @@ public final class ParticleGenerator {
             double[] s = new double[6];
             double[] dir = new double[3];
             double[] c = new double[CANDIDATE];
+            double[] mu = new double[2];
             double[] sum = new double[copies];
             long[] lifted = new long[copies];
             long points = 0;
@@ -253,7 +254,7 @@ public final class ParticleGenerator {
                             u[j] = v >= 1 ? v - 1 : v;
                         }
                         if (base(k, u[0], u[1], s, c)) {
-                            sum[r] += acceptanceOverBand(focus, band, u[2], u[3], s, dir, c);
+                            sum[r] += acceptanceOverBand(focus, band, u[2], u[3], s, dir, c, mu);
                             lifted[r]++;
                         }
                     }
@@ -282,8 +283,7 @@ public final class ParticleGenerator {
      * floor + w (a − floor) / (1 − cos α) when the direction lies in the law's cap ({@link PeriodBand}).
      */
     private double acceptanceOverBand(EjectionFocus focus, PeriodBand band, double x, double y, double[] s, double[] dir,
-            double[] c) {
-        double[] mu = new double[2];
+            double[] c, double[] mu) {
         band.limits(s, c[SPEED] * M_S_TO_AU_D, c[BETA], mu);
         double w = mu[1] - mu[0];
         double floor = band.floor();
@@ -490,7 +490,7 @@ public final class ParticleGenerator {
                 // Only a run of grains it cannot lift says the model lifts none (a narrow band takes many draws).
                 stuck = 0;
                 band.limits(s, c[SPEED] * M_S_TO_AU_D, c[BETA], mu);
-                double envelope = band.mass(mu[1] - mu[0]);
+                double envelope = band.envelope(mu[1] - mu[0]);
                 if (envelope > bound) {
                     throw new IllegalStateException(String.format(java.util.Locale.ROOT,
                             "targeted ejection: a candidate's envelope %.6g exceeds its bound %.6g", envelope, bound));
@@ -566,7 +566,7 @@ public final class ParticleGenerator {
     private boolean base(int bin, double u0, double u1, double[] s, double[] c) {
         double t = production.sample(u0);
         arcStates.stateAt(t, s);
-        double mass = stratified ? sizes.massInBin(bin, u1) : sizes.mass(u1);
+        double mass = massAt(bin, u1);
         double radius = sizes.radius(mass);
         double r = Math.sqrt(s[0] * s[0] + s[1] * s[1] + s[2] * s[2]);
         double v = liftedSpeed(r, radius);
@@ -579,6 +579,11 @@ public final class ParticleGenerator {
         c[BETA] = RadiationPressure.beta(qpr, density, radius);
         c[SPEED] = v;
         return true;
+    }
+
+    /** A mass from a uniform number: inside the size bin when sizes are stratified, else from the whole law. */
+    private double massAt(int bin, double u) {
+        return stratified ? sizes.massInBin(bin, u) : sizes.mass(u);
     }
 
     /** The ejection speed beyond the nucleus' pull, scaled, m/s (negative when the grain is not lifted). */
@@ -645,7 +650,7 @@ public final class ParticleGenerator {
             double speed = Math.sqrt(s[3] * s[3] + s[4] * s[4] + s[5] * s[5]);
             for (int j = 0; j < BAND_GRID_MASSES; j++) {
                 double u = Math.min(j / (BAND_GRID_MASSES - 1.0), Math.nextDown(1.0));
-                double mass = stratified ? sizes.massInBin(k, u) : sizes.mass(u);
+                double mass = massAt(k, u);
                 double v = liftedSpeed(r, sizes.radius(mass));
                 // Near a size the model cannot lift, speeds fall to zero between the grid's masses.
                 min = v > 0 ? Math.min(min, speed * v * M_S_TO_AU_D) : 0;

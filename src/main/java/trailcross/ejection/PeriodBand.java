@@ -77,7 +77,7 @@ public final class PeriodBand {
             for (int j = 0; j < CELLS; j++) {
                 double least = (1 - MARGIN) * leastSpeedProduct[k][j];
                 double w = least > 0 ? Math.min(2, spread / (2 * least)) : 2;
-                bound[k][j] = mass(w + 2 * WIDEN);
+                bound[k][j] = envelope(w + 2 * WIDEN);
                 sum += bound[k][j];
                 cumulative[k][j] = sum;
             }
@@ -127,7 +127,7 @@ public final class PeriodBand {
      * @param width the band's width w in μ (≥ 0)
      * @return M(u) = floor + (1 − floor) w / (1 − cos α), the envelope's mass
      */
-    public double mass(double width) {
+    public double envelope(double width) {
         return floor + (1 - floor) * Math.max(0, width) / capArea;
     }
 
